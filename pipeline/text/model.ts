@@ -1,0 +1,146 @@
+/**
+ * The text model: a plain text split into chapters, paragraphs, sentences and
+ * word tokens. Offsets are UTF-16 code-unit offsets into `text` (the normalised
+ * text: BOM removed, CRLF/CR turned into LF). `sourceOffset()` maps one back
+ * to the file as read. Per-token and per-sentence data live in typed-array
+ * columns so that a million-word text stays compact.
+ */
+
+export interface Chapter {
+  /** 0-based position in `chapters`. */
+  index: number;
+  /** Display title, e.g. "Chapter III: The Weir" or "III. The Weir"; a generated "Chapter 3" when the heading has no words. */
+  title: string;
+  /** The heading line exactly as it stands in the text, or null for an implicit chapter (a text with no headings). */
+  heading: string | null;
+  /** The enclosing BOOK/PART heading, if any. */
+  part: string | null;
+  /** 1-based line in the source file of the heading (or of the first paragraph). */
+  line: number;
+  /** Character range of the chapter body in `text`. */
+  start: number;
+  end: number;
+  firstParagraph: number;
+  paragraphCount: number;
+  firstSentence: number;
+  sentenceCount: number;
+  firstToken: number;
+  tokenCount: number;
+}
+
+export interface Columns {
+  count: number;
+}
+
+export interface ParagraphColumns extends Columns {
+  start: Uint32Array;
+  end: Uint32Array;
+  chapter: Uint32Array;
+  /** 1-based source line of the paragraph's first line. */
+  line: Uint32Array;
+}
+
+export interface SentenceColumns extends Columns {
+  start: Uint32Array;
+  end: Uint32Array;
+  paragraph: Uint32Array;
+  firstToken: Uint32Array;
+  tokenCount: Uint32Array;
+}
+
+export interface TokenColumns extends Columns {
+  start: Uint32Array;
+  end: Uint32Array;
+  sentence: Uint32Array;
+  paragraph: Uint32Array;
+  chapter: Uint32Array;
+  /** Index into `vocab` of the token's lower-cased form. */
+  type: Uint32Array;
+  /** Bit flags, see TOKEN_FLAGS. */
+  flags: Uint8Array;
+}
+
+export const TOKEN_FLAGS = {
+  /** Starts with an upper-case letter. */
+  capitalised: 1,
+  /** Made only of digits (and separators). */
+  numeric: 2,
+  /** First word of its sentence. */
+  sentenceInitial: 4,
+} as const;
+
+export interface TextWarning {
+  code: string;
+  message: string;
+  line?: number;
+  column?: number;
+}
+
+export interface TextModel {
+  /** The text's id in the plan (or the file name for ad-hoc use). */
+  id: string;
+  /** sha256 (hex) of the file's bytes as read. */
+  hash: string;
+  /** Normalised text. */
+  text: string;
+  chapters: Chapter[];
+  paragraphs: ParagraphColumns;
+  sentences: SentenceColumns;
+  tokens: TokenColumns;
+  /** Lower-cased word forms; `tokens.type[i]` indexes this. */
+  vocab: string[];
+  /** Map an offset in `text` to the code-unit offset in the source as read (before BOM/CRLF normalisation). */
+  sourceOffset(offset: number): number;
+  /** Map an offset in `text` to a 1-based line and column in the source file. */
+  position(offset: number): { line: number; column: number };
+  warnings: TextWarning[];
+  /**
+   * Stretches of `text` outside every chapter (text before the first chapter
+   * heading, or between a part heading and its first chapter). They have no
+   * paragraphs, sentences or tokens. Empty when every paragraph is in a chapter.
+   */
+  skipped?: TextRange[];
+}
+
+/** A stretch of `text` and the 1-based source line where it begins. */
+export interface TextRange {
+  start: number;
+  end: number;
+  line: number;
+}
+
+export interface TextOptions {
+  id: string;
+  /** Trim everything before the first line that contains this marker (the marker line is dropped too). */
+  start?: string;
+  /** Trim everything from the first line after `start` that contains this marker. */
+  end?: string;
+  /** A regular expression (source string, matched per line, case-insensitive) that a chapter heading line matches. Replaces automatic detection. */
+  chapterPattern?: string;
+}
+
+export interface CastMember {
+  id: string;
+  name: string;
+  aliases: string[];
+  pronoun?: 'he' | 'she' | 'they' | 'it';
+}
+
+export interface Mentions {
+  count: number;
+  /** Index of the first token of the mention. */
+  token: Uint32Array;
+  /** Number of tokens the mention spans. */
+  length: Uint8Array;
+  /** Index into the cast array. */
+  member: Uint32Array;
+  /** Mentions that could name more than one cast member; they are reported, not attributed. */
+  ambiguous: AmbiguousMention[];
+}
+
+export interface AmbiguousMention {
+  token: number;
+  text: string;
+  chapter: number;
+  candidates: string[];
+}
