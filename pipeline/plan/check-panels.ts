@@ -1,0 +1,187 @@
+/**
+ * Panel cross-references: the text a panel reads, its measure and chart
+ * against the registry, their params/options against the registry's schemas,
+ * and characters named in notes against the cast.
+ */
+import type { z } from 'zod';
+import { issueProblems } from './issues.ts';
+import type { UnknownKeyWording } from './issues.ts';
+import { asList, asRecord, asText, idsOf, panelsOf } from './raw.ts';
+import type { RawRecord, Reporter } from './raw.ts';
+import type { Registry } from './registry.ts';
+import { registryNames } from './registry.ts';
+import { allowedKeys, dropsUnknownKeys } from './schema-walk.ts';
+import type { PathSegment } from './source.ts';
+import { suggestionHint } from './suggest.ts';
+
+/** Parsed params and options of each panel, keyed by `${room}/${panel}` indices. */
+export interface PanelSettings {
+  params: Map<string, unknown>;
+  options: Map<string, unknown>;
+}
+
+export function panelKey(room: number, panel: number): string {
+  return `${room}/${panel}`;
+}
+
+function quoted(names: readonly string[]): string {
+  return names.map((n) => `"${n}"`).join(', ');
+}
+
+interface Settings {
+  schema: z.ZodType;
+  value: unknown;
+  path: PathSegment[];
+  unknownKey: UnknownKeyWording;
+}
+
+/** Validates params or options; returns the parsed output, or undefined when they are not valid. */
+function checkSettings(s: Settings, r: Reporter): { ok: boolean; output?: unknown } {
+  const value = s.value === undefined ? {} : s.value;
+  // Not a mapping: the plan schema already says so.
+  if (asRecord(value) === undefined) return { ok: false };
+  let ok = true;
+  if (dropsUnknownKeys(s.schema)) {
+    const allowed = allowedKeys(s.schema) ?? [];
+    for (const key of Object.keys(value as object)) {
+      if (allowed.includes(key)) continue;
+      ok = false;
+      r.reportKey(s.path, key, {
+        code: s.unknownKey.code,
+        message: s.unknownKey.message(key),
+        hint: suggestionHint(key, allowed, s.unknownKey.plural),
+      });
+    }
+  }
+  const parsed = s.schema.safeParse(value);
+  if (!parsed.success) {
+    r.problems.push(
+      ...issueProblems(parsed.error.issues, {
+        file: r.file,
+        source: r.source,
+        schema: s.schema,
+        value,
+        base: s.path,
+        unknownKey: s.unknownKey,
+      }),
+    );
+    return { ok: false };
+  }
+  return ok ? { ok: true, output: parsed.data } : { ok: false };
+}
+
+export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): PanelSettings {
+  const settings: PanelSettings = { params: new Map(), options: new Map() };
+  const textIds = idsOf(plan.texts).map((t) => t.id);
+  const castIds = idsOf(plan.cast).map((c) => c.id);
+  const hasCast = asList(plan.cast).length > 0;
+  const measureNames = registryNames(registry.measures);
+  const chartNames = registryNames(registry.charts);
+
+  for (const { panel, room, index, path } of panelsOf(plan)) {
+    const key = panelKey(room, index);
+
+    // The text the panel reads.
+    const text = panel.text;
+    if (text === undefined) {
+      if (textIds.length > 1) {
+        r.report([...path, 'text'], {
+          code: 'plan/missing-text',
+          message: 'the panel does not say which text it reads, and the plan has several',
+          hint: `add "text:" with one of: ${quoted(textIds)}`,
+        });
+      }
+    } else if (asText(text) !== undefined && !textIds.includes(text as string)) {
+      r.report([...path, 'text'], {
+        code: 'plan/unknown-text',
+        message: `unknown text "${text as string}"`,
+        hint: suggestionHint(text as string, textIds, 'text ids'),
+      });
+    }
+
+    // The measure and its params.
+    const measureName = asText(panel.measure);
+    const measure = measureName !== undefined && Object.hasOwn(registry.measures, measureName) ? registry.measures[measureName] : undefined;
+    if (measureName !== undefined && measure === undefined) {
+      r.report([...path, 'measure'], {
+        code: 'plan/unknown-measure',
+        message: `unknown measure "${measureName}"`,
+        hint: suggestionHint(measureName, measureNames, 'measures'),
+      });
+    }
+    if (measure !== undefined && measure.needsCast && !hasCast) {
+      r.report([...path, 'measure'], {
+        code: 'plan/needs-cast',
+        message: `the measure "${measureName}" needs a cast, and the plan has none`,
+        hint: 'add a "cast:" list naming the characters (id and name of each)',
+      });
+    }
+    if (measure !== undefined) {
+      const done = checkSettings(
+        {
+          schema: measure.params,
+          value: panel.params,
+          path: [...path, 'params'],
+          unknownKey: {
+            code: 'plan/unknown-param',
+            message: (k) => `unknown parameter "${k}" for measure "${measureName}"`,
+            plural: `parameters of "${measureName}"`,
+          },
+        },
+        r,
+      );
+      if (done.ok) settings.params.set(key, done.output);
+    }
+
+    // The chart and its options.
+    const chartName = asText(panel.chart);
+    const chart = chartName !== undefined && Object.hasOwn(registry.charts, chartName) ? registry.charts[chartName] : undefined;
+    if (chartName !== undefined && chart === undefined) {
+      const supported = measure?.charts ?? [];
+      const near = suggestionHint(chartName, supported, 'charts');
+      r.report([...path, 'chart'], {
+        code: 'plan/unknown-chart',
+        message: `unknown chart "${chartName}"`,
+        hint: near.startsWith('did you mean')
+          ? near
+          : measure !== undefined
+            ? `"${measureName}" can be drawn as: ${quoted(supported)}`
+            : suggestionHint(chartName, chartNames, 'charts'),
+      });
+    } else if (chartName !== undefined && measure !== undefined && !measure.charts.includes(chartName)) {
+      r.report([...path, 'chart'], {
+        code: 'plan/chart-not-supported',
+        message: `the measure "${measureName}" cannot be drawn as "${chartName}"`,
+        hint: measure.charts.length > 0 ? `it can be drawn as: ${quoted(measure.charts)}` : 'it names no chart it can be drawn as',
+      });
+    }
+    if (chart !== undefined) {
+      const done = checkSettings(
+        {
+          schema: chart.options,
+          value: panel.options,
+          path: [...path, 'options'],
+          unknownKey: {
+            code: 'plan/unknown-option',
+            message: (k) => `unknown option "${k}" for chart "${chartName}"`,
+            plural: `options of "${chartName}"`,
+          },
+        },
+        r,
+      );
+      if (done.ok) settings.options.set(key, done.output);
+    }
+
+    // Characters named by notes.
+    asList(panel.notes).forEach((note, n) => {
+      const character = asText(asRecord(asRecord(note)?.at)?.character);
+      if (character === undefined || castIds.includes(character)) return;
+      r.report([...path, 'notes', n, 'at', 'character'], {
+        code: 'plan/unknown-cast',
+        message: `unknown cast member "${character}"`,
+        hint: hasCast ? suggestionHint(character, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters',
+      });
+    });
+  }
+  return settings;
+}

@@ -1,0 +1,209 @@
+/**
+ * Turning zod's validation issues into curator-facing problems: a plain
+ * sentence, a hint (often the field's own description), and the line and
+ * column of the offending value in the YAML.
+ */
+import type { z } from 'zod';
+import type { Problem } from '../problems.ts';
+import { allowedKeys, descriptionOf, schemaAt } from './schema-walk.ts';
+import { formatPath } from './source.ts';
+import type { PathSegment, PlanSource } from './source.ts';
+import { nearest, suggestionHint } from './suggest.ts';
+
+type Issue = z.core.$ZodIssue;
+
+export interface UnknownKeyWording {
+  code: string;
+  /** E.g. (key) => `unknown option "${key}" for chart "bars"`. */
+  message: (key: string) => string;
+  /** E.g. `options of "bars"`, as in "the options of "bars" are: …". */
+  plural: string;
+}
+
+export interface IssueContext {
+  /** The plan file as shown to the user. */
+  file: string;
+  source: PlanSource;
+  /** The schema the value was checked against. */
+  schema: z.ZodType;
+  /** The value that was checked. */
+  value: unknown;
+  /** Where the value sits in the plan. */
+  base: readonly PathSegment[];
+  /** How to report keys the schema does not know: code, the message for a key, and the plural used in "the … are:". */
+  unknownKey: UnknownKeyWording;
+}
+
+/** Plain data at a path, or undefined. */
+export function valueAt(value: unknown, path: readonly PathSegment[]): unknown {
+  let current = value;
+  for (const seg of path) {
+    if (current === null || typeof current !== 'object') return undefined;
+    current = (current as Record<string | number, unknown>)[seg];
+  }
+  return current;
+}
+
+function quoteShort(s: string): string {
+  return JSON.stringify(s.length > 40 ? `${s.slice(0, 37)}…` : s);
+}
+
+/** "text "abc"", "the number 3", "a list", … */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'an empty value';
+  if (typeof value === 'string') return `the text ${quoteShort(value)}`;
+  if (typeof value === 'number') return `the number ${value}`;
+  if (typeof value === 'boolean') return `${value}`;
+  if (Array.isArray(value)) return 'a list';
+  if (typeof value === 'object') return 'a mapping (key: value lines)';
+  return typeof value;
+}
+
+const EXPECTED: Record<string, string> = {
+  string: 'text',
+  number: 'a number',
+  int: 'a whole number',
+  boolean: 'true or false',
+  array: 'a list',
+  object: 'a mapping (key: value lines)',
+  record: 'a mapping (key: value lines)',
+  map: 'a mapping (key: value lines)',
+};
+
+function lastKey(path: readonly PathSegment[]): string {
+  for (let i = path.length - 1; i >= 0; i--) {
+    const seg = path[i];
+    if (typeof seg === 'string') return seg;
+  }
+  return 'value';
+}
+
+function listValues(values: readonly unknown[]): string {
+  return values.map((v) => JSON.stringify(v)).join(', ');
+}
+
+interface Wording {
+  code: string;
+  message: string;
+  hint?: string;
+}
+
+/** Words one issue; `about` is the description of the field, used as the hint when nothing better is known. */
+function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wording {
+  switch (issue.code) {
+    case 'invalid_type': {
+      const expected = EXPECTED[issue.expected] ?? issue.expected;
+      if (value === undefined) {
+        const key = lastKey(issue.path as PathSegment[]);
+        return {
+          code: 'plan/missing-key',
+          message: `"${key}" is missing`,
+          hint: about ? `add "${key}:" here (${about})` : `add "${key}:" here`,
+        };
+      }
+      let hint = about;
+      if (value === null) {
+        hint = `write a value after the colon, or remove the line if the key is optional${about ? ` (${about})` : ''}`;
+      } else if (issue.expected === 'string' && (typeof value === 'number' || typeof value === 'boolean')) {
+        hint = `put the value in quotes: "${String(value)}"`;
+      } else if (issue.expected === 'int' && typeof value === 'number') {
+        hint = 'use a whole number';
+      }
+      return { code: 'plan/wrong-type', message: `expected ${expected}, found ${describeValue(value)}`, hint };
+    }
+    case 'invalid_value': {
+      const values = issue.values;
+      if (values.length === 1) {
+        return { code: 'plan/invalid-value', message: `must be ${JSON.stringify(values[0])}, found ${describeValue(value)}`, hint: about };
+      }
+      const close = typeof value === 'string' ? nearest(value, values.filter((v): v is string => typeof v === 'string')) : undefined;
+      return {
+        code: 'plan/invalid-value',
+        message: `${describeValue(value)} is not one of the accepted values`,
+        hint: close !== undefined ? `did you mean "${close}"? (accepted: ${listValues(values)})` : `accepted: ${listValues(values)}`,
+      };
+    }
+    case 'too_small': {
+      const min = Number(issue.minimum);
+      if (issue.origin === 'array' || issue.origin === 'set') {
+        return { code: 'plan/too-few', message: `the list needs at least ${min} ${min === 1 ? 'entry' : 'entries'}`, hint: about };
+      }
+      if (issue.origin === 'string') {
+        return min <= 1
+          ? { code: 'plan/empty', message: 'the value is empty', hint: about ?? 'write a value, or remove the line' }
+          : { code: 'plan/too-short', message: `the text must be at least ${min} characters long`, hint: about };
+      }
+      const bound = issue.inclusive ? `${min} or more` : `more than ${min}`;
+      return { code: 'plan/too-small', message: `must be ${bound}, found ${describeValue(value)}`, hint: about };
+    }
+    case 'too_big': {
+      const max = Number(issue.maximum);
+      if (issue.origin === 'array' || issue.origin === 'set') {
+        return { code: 'plan/too-many', message: `the list may have at most ${max} ${max === 1 ? 'entry' : 'entries'}`, hint: about };
+      }
+      if (issue.origin === 'string') {
+        return { code: 'plan/too-long', message: `the text may be at most ${max} characters long`, hint: about };
+      }
+      const bound = issue.inclusive ? `${max} or less` : `less than ${max}`;
+      return { code: 'plan/too-big', message: `must be ${bound}, found ${describeValue(value)}`, hint: about };
+    }
+    case 'not_multiple_of':
+      return { code: 'plan/invalid-value', message: `must be a multiple of ${String(issue.divisor)}, found ${describeValue(value)}`, hint: about };
+    case 'invalid_format': {
+      // Messages set in a schema are kept; zod's own generic ones are reworded.
+      const own = !issue.message.startsWith('Invalid');
+      return {
+        code: 'plan/bad-format',
+        message: own ? issue.message : `${describeValue(value)} is not in the expected form (${issue.pattern ?? issue.format})`,
+        hint: about,
+      };
+    }
+    case 'custom': {
+      const params = (issue.params ?? {}) as { hint?: unknown; code?: unknown };
+      return {
+        code: typeof params.code === 'string' ? params.code : 'plan/invalid',
+        message: issue.message,
+        hint: typeof params.hint === 'string' ? params.hint : about,
+      };
+    }
+    case 'invalid_union':
+      return { code: 'plan/invalid', message: `${describeValue(value)} matches none of the accepted forms`, hint: about };
+    default:
+      return { code: 'plan/invalid', message: issue.message, hint: about };
+  }
+}
+
+function problem(ctx: IssueContext, path: readonly PathSegment[], line: number, column: number, w: Wording): Problem {
+  const p: Problem = { severity: 'error', code: w.code, file: ctx.file, line, column, path: formatPath(path), message: w.message };
+  if (w.hint !== undefined) p.hint = w.hint;
+  return p;
+}
+
+/** One problem per issue, and one per unknown key. */
+export function issueProblems(issues: readonly Issue[], ctx: IssueContext): Problem[] {
+  const out: Problem[] = [];
+  for (const issue of issues) {
+    const rel = issue.path.filter((s): s is PathSegment => typeof s === 'string' || typeof s === 'number');
+    const path = [...ctx.base, ...rel];
+    if (issue.code === 'unrecognized_keys') {
+      const allowed = allowedKeys(schemaAt(ctx.schema, rel)) ?? [];
+      for (const key of issue.keys) {
+        const pos = ctx.source.keyAt(path, key);
+        out.push(
+          problem(ctx, [...path, key], pos.line, pos.column, {
+            code: ctx.unknownKey.code,
+            message: ctx.unknownKey.message(key),
+            hint: suggestionHint(key, allowed, ctx.unknownKey.plural),
+          }),
+        );
+      }
+      continue;
+    }
+    const value = valueAt(ctx.value, rel);
+    const wording = wordIssue(issue, value, descriptionOf(schemaAt(ctx.schema, rel)));
+    const pos = ctx.source.at(path);
+    out.push(problem(ctx, path, pos.line, pos.column, wording));
+  }
+  return out;
+}

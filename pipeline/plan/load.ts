@@ -1,0 +1,109 @@
+/**
+ * Loading an exhibit plan: read the YAML with positions, validate it against
+ * the schema and the registry, check every file it names, and resolve it.
+ * Every problem is reported in one run, sorted by position; the plan is
+ * returned only when there is no error.
+ */
+import { readFile } from 'node:fs/promises';
+import path from 'node:path';
+import type { Problem } from '../problems.ts';
+import { hasErrors } from '../problems.ts';
+import { checkFiles } from './check-files.ts';
+import { checkSharedNames, checkUniqueIds } from './check-ids.ts';
+import { checkPanels } from './check-panels.ts';
+import { displayPath } from './files.ts';
+import { issueProblems } from './issues.ts';
+import { asRecord, makeReporter } from './raw.ts';
+import type { Registry } from './registry.ts';
+import { resolvePlan } from './resolve.ts';
+import { planSchema } from './schema.ts';
+import { readPlanSource } from './source.ts';
+import type { LoadOptions, PlanResult } from './types.ts';
+
+export type { LoadOptions, Plan, PlanResult } from './types.ts';
+
+/** Problems in reading order: by line, then column; problems about the whole file first. */
+export function sortProblems(problems: readonly Problem[]): Problem[] {
+  return [...problems].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+}
+
+function reason(error: unknown): string {
+  const code = (error as { code?: unknown }).code;
+  if (code === 'ENOENT') return 'the file does not exist';
+  if (code === 'EISDIR') return 'it is a folder, not a file';
+  if (code === 'EACCES') return 'permission denied';
+  return error instanceof Error ? error.message : String(error);
+}
+
+/**
+ * Loads the plan at `planPath` (relative to `opts.cwd`, default the working
+ * directory) and checks it against `registry`.
+ */
+export async function loadPlan(planPath: string, registry: Registry, opts: LoadOptions = {}): Promise<PlanResult> {
+  const cwd = path.resolve(opts.cwd ?? process.cwd());
+  const file = path.resolve(cwd, planPath);
+  const dir = path.dirname(file);
+  const shownFile = displayPath(file, cwd);
+  const done = (problems: Problem[], plan: PlanResult['plan'] = null): PlanResult => ({ plan, problems: sortProblems(problems), dir, file });
+
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch (error) {
+    return done([
+      {
+        severity: 'error',
+        code: 'plan/unreadable',
+        file: shownFile,
+        message: `cannot read the exhibit plan: ${reason(error)}`,
+        hint: 'check the path given to the command; the plan is normally content/exhibit.yaml',
+      },
+    ]);
+  }
+  if (text.startsWith('\uFEFF')) text = text.slice(1);
+
+  const source = readPlanSource(text);
+  const syntax = source.problems.map((p) => ({ ...p, file: shownFile }));
+  if (source.data === undefined) return done(syntax);
+  if (source.data === null) {
+    return done([
+      ...syntax,
+      {
+        severity: 'error',
+        code: 'plan/empty',
+        file: shownFile,
+        line: 1,
+        column: 1,
+        message: 'the exhibit plan is empty',
+        hint: 'write "version: 1", then the "exhibit:", "texts:" and "rooms:" sections',
+      },
+    ]);
+  }
+
+  const raw = asRecord(source.data);
+  const r = makeReporter(source, shownFile);
+  r.problems.push(...syntax);
+  const parsed = planSchema.safeParse(source.data);
+  if (!parsed.success) {
+    r.problems.push(
+      ...issueProblems(parsed.error.issues, {
+        file: shownFile,
+        source,
+        schema: planSchema,
+        value: source.data,
+        base: [],
+        unknownKey: { code: 'plan/unknown-key', message: (key) => `unknown key "${key}"`, plural: 'keys allowed here' },
+      }),
+    );
+  }
+  if (raw === undefined) return done(r.problems);
+
+  checkUniqueIds(raw, r);
+  checkSharedNames(raw, r);
+  const settings = checkPanels(raw, registry, r);
+  const files = await checkFiles(raw, dir, cwd, r);
+
+  if (!parsed.success || hasErrors(r.problems)) return done(r.problems);
+  const plan = resolvePlan({ data: parsed.data, source, shownFile, file, dir, files, settings });
+  return done(r.problems, plan);
+}

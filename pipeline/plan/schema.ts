@@ -1,0 +1,194 @@
+/**
+ * The exhibit plan, schema version 1: the single source of truth for what a
+ * curator may write in `exhibit.yaml`. Every field carries a description with
+ * its default; the loader quotes these descriptions in its hints.
+ *
+ * Custom checks put their advice in `params.hint`, which the loader shows
+ * after the message.
+ */
+import { z } from 'zod';
+
+/** Pattern every id follows: lower-case letters, digits and hyphens, not starting with a hyphen. */
+export const ID_PATTERN = /^[a-z0-9][a-z0-9-]*$/;
+
+/** Room ids the site uses for its own pages. */
+export const RESERVED_ROOM_IDS: readonly string[] = ['methods', 'about', 'data', 'slides', 'cards', '_astro'];
+
+/** Schema version this loader reads. */
+export const PLAN_VERSION = 1;
+
+/** An id: `[a-z0-9][a-z0-9-]*`. */
+export const idSchema = z.string().refine((s) => ID_PATTERN.test(s), {
+  error: (issue) => `${JSON.stringify(issue.input)} is not a valid id`,
+  params: {
+    hint: 'ids use lower-case letters, digits and hyphens, and start with a letter or digit (e.g. "chapter-lengths")',
+  },
+});
+
+const text = z.string().min(1);
+
+/** A path to a file inside the exhibit folder, as the curator wrote it. */
+const filePath = z.string().min(1);
+
+function compiles(pattern: string): string | undefined {
+  try {
+    new RegExp(pattern, 'i');
+    return undefined;
+  } catch (e) {
+    return e instanceof Error ? e.message : String(e);
+  }
+}
+
+export const exhibitSchema = z
+  .strictObject({
+    title: text.describe('Title of the exhibit. Required.'),
+    subtitle: text.optional().describe('Subtitle shown under the title. Optional, no default.'),
+    organiser: text.describe('Who puts the exhibit on (a person, circle or society). Required.'),
+    language: z
+      .string()
+      .regex(/^[a-z]{2}$/, { error: 'the language must be a two-letter ISO 639-1 code in lower case, e.g. "en"' })
+      .default('en')
+      .describe('ISO 639-1 code of the language of the texts. Default "en".'),
+    base: z
+      .string()
+      .refine((s) => s.startsWith('/') && s.endsWith('/'), {
+        error: (issue) => `the base path ${JSON.stringify(issue.input)} must start and end with "/"`,
+        params: { hint: 'write "/" for a site at the root of its domain, or e.g. "/weir/" for a sub-folder' },
+      })
+      .default('/')
+      .describe('Base path the site is served under; starts and ends with "/". Default "/".'),
+    credit: text.optional().describe('Credit line shown in the footer. Optional, no default.'),
+    intro: filePath.optional().describe('MDX file shown on the home page, relative to the exhibit folder. Optional, no default.'),
+    rights: filePath
+      .optional()
+      .describe("MDX file with the curator's statement on the text's copyright status, relative to the exhibit folder. Optional, no default."),
+  })
+  .describe('The exhibit as a whole. Required.');
+
+export const textSchema = z
+  .strictObject({
+    id: idSchema.describe('Id of the text, unique among texts; panels name it in "text". Required.'),
+    source: filePath.describe('The text file, relative to the exhibit folder. Required.'),
+    format: z.enum(['plain']).default('plain').describe('Format of the text file; only "plain" in version 1. Default "plain".'),
+    start: text
+      .optional()
+      .describe('Trim marker: everything up to and including the first line containing it is dropped. Optional, no default (nothing dropped).'),
+    end: text
+      .optional()
+      .describe('Trim marker: everything from the first line containing it is dropped. Optional, no default (nothing dropped).'),
+    chapters: text
+      .superRefine((pattern, ctx) => {
+        const error = compiles(pattern);
+        if (error !== undefined) {
+          ctx.addIssue({
+            code: 'custom',
+            message: `the chapter pattern is not a valid regular expression (${error})`,
+            params: { hint: 'in YAML double quotes write a backslash as "\\\\", or use single quotes' },
+          });
+        }
+      })
+      .optional()
+      .describe('Chapter-heading pattern: a regular expression matched per line, ignoring case. Optional, no default (headings are found by the text reader).'),
+    edition: text.optional().describe('Note on the edition the text was taken from. Optional, no default.'),
+  })
+  .describe('A text the exhibit reads.');
+
+export const pronounSchema = z.enum(['he', 'she', 'they', 'it']);
+
+export const castMemberSchema = z
+  .strictObject({
+    id: idSchema.describe('Id of the character, unique within the cast; notes name it in "at: { character }". Required.'),
+    name: text.describe('Full name of the character as it appears in the text. Required.'),
+    aliases: z
+      .array(text)
+      .default([])
+      .describe('Other names the character goes by in the text. Default [] (none).'),
+    pronoun: pronounSchema.optional().describe('Pronoun of the character: he, she, they or it. Optional, no default.'),
+  })
+  .describe('A character of the texts.');
+
+export const noteAnchorSchema = z
+  .strictObject({
+    chapter: z.number().int().positive().optional().describe('Chapter number, 1-based. Optional.'),
+    character: idSchema.optional().describe('Cast id of a character. Optional.'),
+    word: text.optional().describe('A word of the text. Optional.'),
+    segment: z.number().int().positive().optional().describe('Segment number, 1-based. Optional.'),
+  })
+  .superRefine((at, ctx) => {
+    const given = Object.entries(at).filter(([, v]) => v !== undefined).length;
+    if (given !== 1) {
+      ctx.addIssue({
+        code: 'custom',
+        message: given === 0 ? 'the note does not say what it points at' : 'the note points at more than one thing',
+        params: { hint: 'give exactly one of: chapter, character, word, segment' },
+      });
+    }
+  })
+  .describe('What the note points at: exactly one of chapter, character, word, segment. Required.');
+
+export const noteSchema = z
+  .strictObject({
+    at: noteAnchorSchema,
+    text: text.describe('The note itself. Required.'),
+  })
+  .describe('A curator note pinned to the data.');
+
+export const panelSchema = z
+  .strictObject({
+    id: idSchema.describe('Id of the panel, unique across the whole exhibit. Required.'),
+    title: text.describe('Title of the panel, usually a question. Required.'),
+    text: idSchema
+      .optional()
+      .describe('Id of the text the panel reads. Optional when the plan has exactly one text (that one is used).'),
+    measure: text.describe('Name of a registered measure. Required.'),
+    params: z
+      .record(z.string(), z.unknown())
+      .default({})
+      .describe("Parameters of the measure, checked by the measure's own schema. Default {} (the measure's defaults)."),
+    chart: text.describe('Chart kind the measure is drawn as; must be one the measure supports. Required.'),
+    options: z
+      .record(z.string(), z.unknown())
+      .default({})
+      .describe("Options of the chart, checked by the chart's own schema. Default {} (the chart's defaults)."),
+    caption: filePath.describe('MDX (or .md) caption file, relative to the exhibit folder. Required.'),
+    alt: text.optional().describe('Replaces the generated alt text of the chart. Optional, no default.'),
+    notes: z.array(noteSchema).default([]).describe('Curator notes pinned to the data. Default [] (none).'),
+  })
+  .describe('A panel: one measure drawn as one chart, with its caption.');
+
+export const roomSchema = z
+  .strictObject({
+    id: idSchema
+      .refine((s) => !RESERVED_ROOM_IDS.includes(s), {
+        error: (issue) => `the room id ${JSON.stringify(issue.input)} is reserved for the site's own pages`,
+        params: { hint: `choose another id; reserved: ${RESERVED_ROOM_IDS.join(', ')}` },
+      })
+      .describe(`Id of the room, unique among rooms; not one of ${RESERVED_ROOM_IDS.join(', ')}. Required.`),
+    title: text.describe('Title of the room. Required.'),
+    intro: filePath.optional().describe('MDX file introducing the room, relative to the exhibit folder. Optional, no default.'),
+    panels: z.array(panelSchema).min(1).describe('The panels of the room, in order. One or more.'),
+  })
+  .describe('A room: a page of panels.');
+
+export const planSchema = z
+  .strictObject({
+    version: z.literal(PLAN_VERSION).describe('Schema version of the plan; must be 1. Required.'),
+    exhibit: exhibitSchema,
+    texts: z.array(textSchema).min(1).describe('The texts the exhibit reads. One or more.'),
+    cast: z.array(castMemberSchema).default([]).describe('The characters, for measures that need them. Default [] (no cast).'),
+    rooms: z.array(roomSchema).min(1).describe('The rooms of the exhibit, in order. One or more.'),
+  })
+  .describe('An exhibit plan: "version: 1", then the exhibit, texts, cast (optional) and rooms sections.');
+
+/** The plan as a curator may write it (defaults not yet filled). */
+export type PlanInput = z.input<typeof planSchema>;
+/** The plan as validated by the schema: defaults filled, paths still as written. */
+export type PlanData = z.output<typeof planSchema>;
+export type ExhibitData = z.output<typeof exhibitSchema>;
+export type TextData = z.output<typeof textSchema>;
+export type CastMemberData = z.output<typeof castMemberSchema>;
+export type Pronoun = z.output<typeof pronounSchema>;
+export type NoteAnchor = z.output<typeof noteAnchorSchema>;
+export type NoteData = z.output<typeof noteSchema>;
+export type PanelData = z.output<typeof panelSchema>;
+export type RoomData = z.output<typeof roomSchema>;
