@@ -1,0 +1,387 @@
+/**
+ * The `vitrine` command.
+ *
+ *   vitrine check   [plan]                      validate plan, files and texts; report what was found
+ *   vitrine measure [plan] --panel ID           the data behind one panel (JSON or CSV)
+ *   vitrine measure --text FILE --measure NAME  ad-hoc: one measure on one text, no plan
+ *   vitrine build   [plan]                      build the site into a fresh folder, then swap it into dist/
+ *   vitrine dev     [plan]                      live preview that follows edits to plan, captions and text
+ *
+ * Exit codes: 0 success; 1 the curator's files have problems (or the build failed);
+ * 2 the command line is wrong; 3 an unexpected internal failure.
+ */
+import { parseArgs } from 'node:util';
+import { existsSync, mkdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parse as parseYaml } from 'yaml';
+import { z } from 'zod';
+import { prepareExhibit, sortProblems, GENERATOR } from './exhibit.ts';
+import type { PrepareResult } from './exhibit.ts';
+import { formatProblem, hasErrors } from './problems.ts';
+import type { Problem } from './problems.ts';
+import { measures } from './measures/registry.ts';
+import { tableToCsv } from './csv.ts';
+import { readText } from './texts.ts';
+import { ResultCache } from './cache/cache.ts';
+import { castMemberSchema } from './plan/schema.ts';
+import type { CastMember } from './text/model.ts';
+import { nearest } from './plan/suggest.ts';
+
+export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
+
+/** The package root: where site/ and astro.config.mjs live. */
+export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const DEFAULT_PLAN = 'content/exhibit.yaml';
+
+const HELP = `vitrine — build an exhibition of visual readings of a text as a static site
+
+Usage:
+  vitrine check [plan]                     Check the plan, its files and texts; list chapters and cast mentions
+  vitrine measure [plan] --panel ID        Print the data behind one panel
+  vitrine measure --text FILE --measure NAME [--cast CAST.yaml] [--param key=value …]
+                                           Run one measure on a text without a plan
+  vitrine build [plan] [--out DIR]         Build the exhibit site (default: dist/)
+  vitrine dev [plan] [--port N]            Preview the exhibit, rebuilding as files change
+
+The plan defaults to ${DEFAULT_PLAN}.
+
+Options:
+  --format json|csv    Output format of \`measure\` (default: json)
+  --language CODE      Language of an ad-hoc text (default: en)
+  --base PATH          Serve the built site under this base path instead of the plan's
+  --no-cache           Compute every measure afresh
+  --quiet              Print only problems
+  --help, --version
+
+Exit codes: 0 success, 1 problems in the exhibit files or a failed build, 2 wrong command line, 3 internal error.
+`;
+
+class UsageError extends Error {}
+
+interface Io {
+  out: (s: string) => void;
+  err: (s: string) => void;
+}
+
+const defaultIo: Io = {
+  out: (s) => process.stdout.write(s),
+  err: (s) => process.stderr.write(s),
+};
+
+export async function main(argv: string[], io: Io = defaultIo): Promise<number> {
+  process.env.ASTRO_TELEMETRY_DISABLED = '1';
+  let args: ReturnType<typeof parse>;
+  try {
+    args = parse(argv);
+  } catch (e) {
+    io.err(`${(e as Error).message}\nRun "vitrine --help" for the commands and options.\n`);
+    return EXIT.usage;
+  }
+  const { values, positionals } = args;
+  if (values.version) {
+    io.out(`${GENERATOR}\n`);
+    return EXIT.ok;
+  }
+  const [command, ...rest] = positionals;
+  if (values.help || !command) {
+    io.out(HELP);
+    return command || values.help ? EXIT.ok : EXIT.usage;
+  }
+  try {
+    switch (command) {
+      case 'check':
+        return await check(rest, values, io);
+      case 'measure':
+        return await measure(rest, values, io);
+      case 'build':
+        return await build(rest, values, io);
+      case 'dev':
+        return await dev(rest, values, io);
+      default: {
+        const near = nearest(command, ['check', 'measure', 'build', 'dev']);
+        throw new UsageError(`unknown command "${command}"${near ? ` — did you mean "${near}"?` : ''}`);
+      }
+    }
+  } catch (e) {
+    if (e instanceof UsageError) {
+      io.err(`${e.message}\nRun "vitrine --help" for the commands and options.\n`);
+      return EXIT.usage;
+    }
+    io.err(`vitrine stopped on an internal error: ${(e as Error).stack ?? String(e)}\n`);
+    return EXIT.internal;
+  }
+}
+
+function parse(argv: string[]) {
+  return parseArgs({
+    args: argv,
+    allowPositionals: true,
+    options: {
+      panel: { type: 'string' },
+      text: { type: 'string' },
+      cast: { type: 'string' },
+      measure: { type: 'string' },
+      param: { type: 'string', multiple: true },
+      format: { type: 'string' },
+      language: { type: 'string' },
+      out: { type: 'string' },
+      base: { type: 'string' },
+      port: { type: 'string' },
+      'no-cache': { type: 'boolean' },
+      quiet: { type: 'boolean', short: 'q' },
+      help: { type: 'boolean', short: 'h' },
+      version: { type: 'boolean' },
+    },
+  });
+}
+
+type Values = ReturnType<typeof parse>['values'];
+
+function planArg(rest: string[]): string {
+  if (rest.length > 1) throw new UsageError(`expected at most one plan file, got: ${rest.join(' ')}`);
+  return resolve(rest[0] ?? DEFAULT_PLAN);
+}
+
+function cacheDir(values: Values): string | null {
+  return values['no-cache'] ? null : resolve(process.env.VITRINE_CACHE_DIR ?? '.vitrine/cache');
+}
+
+function report(problems: Problem[], io: Io): void {
+  for (const p of sortProblems(problems)) io.err(formatProblem(p) + '\n');
+}
+
+function summaryLine(problems: Problem[]): string {
+  const errors = problems.filter((p) => p.severity === 'error').length;
+  const warnings = problems.length - errors;
+  const plural = (n: number, w: string) => `${n} ${w}${n === 1 ? '' : 's'}`;
+  return `${plural(errors, 'error')}, ${plural(warnings, 'warning')}`;
+}
+
+// ——— check ———
+
+async function check(rest: string[], values: Values, io: Io): Promise<number> {
+  const plan = planArg(rest);
+  const log = values.quiet ? undefined : (m: string) => io.out(m + '\n');
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log });
+  const problems = [...result.problems, ...result.texts.flatMap((t) => t.warnings)];
+  if (!values.quiet) {
+    for (const t of result.texts) printTextSummary(t, io);
+  }
+  report(problems, io);
+  if (!values.quiet || hasErrors(problems)) io.out(`${hasErrors(problems) ? 'The exhibit has problems' : 'The exhibit is ready to build'}: ${summaryLine(problems)}.\n`);
+  return hasErrors(problems) ? EXIT.problems : EXIT.ok;
+}
+
+function printTextSummary(t: PrepareResult['texts'][number], io: Io): void {
+  io.out(`\nText "${t.id}" (${t.source}): ${t.words.toLocaleString('en-GB')} words, ${t.chapters.length} chapters\n`);
+  let part: string | null = null;
+  for (const c of t.chapters) {
+    if (c.part && c.part !== part) io.out(`  ${c.part}\n`);
+    part = c.part;
+    io.out(`  ${String(c.number).padStart(3)}. ${c.title}  (${c.words.toLocaleString('en-GB')} words)\n`);
+  }
+  if (t.cast.length) {
+    io.out('  Cast mentions:\n');
+    for (const c of [...t.cast].sort((a, b) => b.mentions - a.mentions)) io.out(`    ${c.name} (${c.id}): ${c.mentions}\n`);
+  }
+  if (t.ambiguous.length) {
+    const byText = new Map<string, { candidates: string[]; chapters: Set<number>; n: number }>();
+    for (const a of t.ambiguous) {
+      const e = byText.get(a.text) ?? { candidates: a.candidates, chapters: new Set(), n: 0 };
+      e.n++;
+      e.chapters.add(a.chapter);
+      byText.set(a.text, e);
+    }
+    io.out('  Ambiguous mentions (not counted for anyone):\n');
+    for (const [text, e] of byText) {
+      io.out(`    "${text}" ×${e.n} in chapter${e.chapters.size > 1 ? 's' : ''} ${[...e.chapters].join(', ')} — could be ${e.candidates.join(' or ')}\n`);
+    }
+  }
+}
+
+// ——— measure ———
+
+async function measure(rest: string[], values: Values, io: Io): Promise<number> {
+  const format = values.format ?? 'json';
+  if (format !== 'json' && format !== 'csv') throw new UsageError(`--format must be json or csv, not "${format}"`);
+  if (values.text) return adhocMeasure(rest, values, format, io);
+  if (!values.panel) throw new UsageError('measure needs --panel ID (with a plan) or --text FILE --measure NAME (without one)');
+  const plan = planArg(rest);
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), only: [values.panel] });
+  if (hasErrors(result.problems)) {
+    report(result.problems, io);
+    return EXIT.problems;
+  }
+  const panel = result.prepared!.rooms.flatMap((r) => r.panels).find((p) => p.id === values.panel);
+  if (!panel) {
+    const all = (await prepareExhibit(plan, { cacheDir: cacheDir(values), only: [] })).prepared;
+    const ids: string[] = [];
+    // Panel ids come from the plan; list them so the user can pick one.
+    if (all) for (const r of all.rooms) ids.push(...r.panels.map((p) => p.id));
+    const near = nearest(values.panel, ids);
+    io.err(`${plan}: there is no panel "${values.panel}"${near ? ` — did you mean "${near}"?` : ''}\n`);
+    return EXIT.problems;
+  }
+  io.out(format === 'csv' ? tableToCsv(panel.table) : JSON.stringify(panel.data, null, 2) + '\n');
+  return EXIT.ok;
+}
+
+async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'csv', io: Io): Promise<number> {
+  if (rest.length) throw new UsageError(`--text runs without a plan; remove "${rest.join(' ')}"`);
+  const name = values.measure;
+  if (!name) throw new UsageError('--text needs --measure NAME');
+  const m = measures[name];
+  if (!m) {
+    const near = nearest(name, Object.keys(measures));
+    throw new UsageError(`unknown measure "${name}"${near ? ` — did you mean "${near}"?` : ` — the measures are: ${Object.keys(measures).join(', ')}`}`);
+  }
+  const problems: Problem[] = [];
+  const cast = values.cast ? readCast(values.cast, problems) : [];
+  const raw: Record<string, unknown> = {};
+  for (const p of values.param ?? []) {
+    const eq = p.indexOf('=');
+    if (eq < 1) throw new UsageError(`--param takes key=value, not "${p}"`);
+    raw[p.slice(0, eq)] = parseValue(p.slice(eq + 1));
+  }
+  const parsed = m.params.safeParse(raw);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      problems.push({ severity: 'error', code: 'cli/param', path: `--param ${issue.path.join('.') || '(params)'}`, message: issue.message });
+    }
+  }
+  if (m.needsCast && !values.cast) problems.push({ severity: 'error', code: 'cli/needs-cast', message: `the measure "${name}" needs a cast`, hint: 'pass --cast CAST.yaml (a YAML list of { id, name, aliases, pronoun })' });
+  const file = resolve(values.text!);
+  const read = readText(file, values.text!, { id: 'text' }, cast);
+  problems.push(...read.problems);
+  if (hasErrors(problems)) {
+    report(problems, io);
+    return EXIT.problems;
+  }
+  const cache = new ResultCache(cacheDir(values));
+  const language = values.language ?? 'en';
+  let result: unknown;
+  try {
+    result = m.compute({ ...read.text!.open(), cast, language }, parsed.data);
+  } catch (e) {
+    io.err(`${values.text}: the measure "${name}" cannot run with these parameters: ${(e as Error).message}\n`);
+    return EXIT.problems;
+  }
+  void cache;
+  io.out(format === 'csv' ? tableToCsv(m.table(result, parsed.data)) : JSON.stringify(result, null, 2) + '\n');
+  return EXIT.ok;
+}
+
+/** `--param` values: numbers, booleans and JSON arrays are read as such, anything else as text. */
+function parseValue(v: string): unknown {
+  if (/^-?\d+(\.\d+)?$/.test(v)) return Number(v);
+  if (v === 'true' || v === 'false') return v === 'true';
+  if (/^\[.*\]$/.test(v)) {
+    try {
+      return JSON.parse(v);
+    } catch {
+      return v.slice(1, -1).split(',').map((s) => s.trim()).filter(Boolean);
+    }
+  }
+  return v;
+}
+
+function readCast(file: string, problems: Problem[]): CastMember[] {
+  let data: unknown;
+  try {
+    data = parseYaml(readFileSync(file, 'utf8'));
+  } catch (e) {
+    problems.push({ severity: 'error', code: 'cast/unreadable', file, message: `the cast file cannot be read: ${(e as Error).message}` });
+    return [];
+  }
+  const parsed = z.array(castMemberSchema).safeParse(data);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      problems.push({ severity: 'error', code: 'cast/invalid', file, path: formatPath(issue.path), message: issue.message, hint: 'the cast file is a YAML list of { id, name, aliases, pronoun }' });
+    }
+    return [];
+  }
+  return parsed.data.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, ...(c.pronoun ? { pronoun: c.pronoun } : {}) }));
+}
+
+function formatPath(path: PropertyKey[]): string {
+  return path.map((p, i) => (typeof p === 'number' ? `[${p}]` : `${i ? '.' : ''}${String(p)}`)).join('');
+}
+
+// ——— build ———
+
+async function build(rest: string[], values: Values, io: Io): Promise<number> {
+  const plan = planArg(rest);
+  const out = resolve(values.out ?? 'dist');
+  const quiet = !!values.quiet;
+  const log = quiet ? undefined : (m: string) => io.out(m + '\n');
+  const started = performance.now();
+  // Check everything first: a plan with problems never reaches Astro and never touches the output folder.
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log });
+  if (hasErrors(result.problems)) {
+    report(result.problems, io);
+    io.err(`Nothing was built; ${out} is unchanged. ${summaryLine(result.problems)}.\n`);
+    return EXIT.problems;
+  }
+  report(result.problems, io);
+  const work = resolve(dirname(out), `.vitrine-build-${process.pid}-${Date.now()}`);
+  const env = { VITRINE_PLAN: plan, VITRINE_OUT_DIR: work, VITRINE_CACHE_DIR: cacheDir(values) ?? '', VITRINE_BASE: values.base ?? '' };
+  const saved = Object.fromEntries(Object.keys(env).map((k) => [k, process.env[k]]));
+  Object.assign(process.env, env);
+  try {
+    const astro = await import('astro');
+    await astro.build({ root: ROOT, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
+    if (!existsSync(join(work, 'index.html'))) throw new Error('the site build finished without writing index.html');
+  } catch (e) {
+    rmSync(work, { recursive: true, force: true });
+    io.err(`The site build failed: ${(e as Error).message}\nNothing was changed in ${out}.\n`);
+    return EXIT.problems;
+  } finally {
+    for (const [k, v] of Object.entries(saved)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
+  }
+  swapInto(work, out);
+  const pages = result.prepared!.rooms.reduce((s, r) => s + r.panels.length, 0);
+  if (!quiet) io.out(`Built ${result.prepared!.exhibit.title}: ${result.prepared!.rooms.length} rooms, ${pages} panels → ${out} (${((performance.now() - started) / 1000).toFixed(1)} s)\n`);
+  return EXIT.ok;
+}
+
+/** Replace `out` with the freshly built `work` folder: rename old away, rename new in, then delete old. */
+function swapInto(work: string, out: string): void {
+  mkdirSync(dirname(out), { recursive: true });
+  const old = `${work}-previous`;
+  const had = existsSync(out);
+  if (had) renameSync(out, old);
+  try {
+    renameSync(work, out);
+  } catch (e) {
+    if (had) renameSync(old, out);
+    throw e;
+  }
+  if (had) rmSync(old, { recursive: true, force: true });
+}
+
+// ——— dev ———
+
+async function dev(rest: string[], values: Values, io: Io): Promise<number> {
+  const plan = planArg(rest);
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values) });
+  report(result.problems, io);
+  if (hasErrors(result.problems)) return EXIT.problems;
+  process.env.VITRINE_PLAN = plan;
+  const c = cacheDir(values);
+  if (c) process.env.VITRINE_CACHE_DIR = c;
+  const port = values.port ? Number(values.port) : 4321;
+  if (!Number.isInteger(port) || port < 1 || port > 65535) throw new UsageError(`--port must be a port number, not "${values.port}"`);
+  const astro = await import('astro');
+  const server = await astro.dev({ root: ROOT, server: { port, host: '127.0.0.1' }, logLevel: values.quiet ? 'error' : 'info' });
+  io.out(`Previewing ${result.prepared!.exhibit.title} at http://127.0.0.1:${server.address.port}${result.prepared!.exhibit.base} — edits to the plan, captions and text are picked up. Ctrl+C stops.\n`);
+  await new Promise<void>((done) => {
+    process.once('SIGINT', done);
+    process.once('SIGTERM', done);
+  });
+  await server.stop();
+  return EXIT.ok;
+}

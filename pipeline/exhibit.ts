@@ -1,0 +1,352 @@
+/**
+ * Preparing an exhibit, in numbered stages:
+ *
+ *   1. plan      load and validate the YAML plan (every problem, with file:line:col)
+ *   2. texts     read each text (UTF-8 check); models are built lazily, only on a cache miss
+ *   3. measures  compute each panel's measure, or take it from the cache (key: text hash,
+ *                reading options, measure name + version + params, cast, language)
+ *   4. notes     resolve each curator note against the panel's chart data
+ *   5. charts    draw each panel as SVG, with alt text and data table
+ *   6. assemble  the PreparedExhibit the site renders (pipeline/prepared.ts)
+ *
+ * Nothing here writes outside the cache folder; the site build is Astro's job.
+ */
+import { readFileSync } from 'node:fs';
+import { createHash } from 'node:crypto';
+
+import { loadPlan } from './plan/load.ts';
+import type { Problem } from './problems.ts';
+import { hasErrors } from './problems.ts';
+import { planRegistry } from './registry.ts';
+import { measures } from './measures/registry.ts';
+import type { Measure, MeasureContext } from './measures/types.ts';
+import { charts } from './charts/index.ts';
+import type { ChartData, PinnedNote } from './charts/types.ts';
+import { cacheKey, ResultCache } from './cache/cache.ts';
+import { readText } from './texts.ts';
+import type { ReadText } from './texts.ts';
+import type { CastMember, TextOptions } from './text/model.ts';
+import type { PreparedExhibit, PreparedMethod, PreparedNote, PreparedPanel, PreparedRoom, PreparedText } from './prepared.ts';
+import type { StructureResult } from './measures/structure.ts';
+import { planJobs } from './jobs.ts';
+import type { ExhibitJobs, PanelJob, TextJob, Where } from './jobs.ts';
+import { paramDocs } from './params.ts';
+
+export const GENERATOR = 'Vitrine 0.1.0';
+
+export interface PrepareOptions {
+  /** Folder for cached measure results; null keeps nothing on disk. */
+  cacheDir: string | null;
+  /** Progress lines. */
+  log?: (message: string) => void;
+  /** Prepare only these panels (by id). Default: all. */
+  only?: string[];
+  /** Override the plan's base path (e.g. to serve a build from a sub-folder). */
+  base?: string;
+}
+
+export interface PrepareResult {
+  prepared: PreparedExhibit | null;
+  problems: Problem[];
+  /** The exhibit folder. */
+  dir: string;
+  /** Files the result depends on (plan, texts), for a live preview to watch. */
+  watch: string[];
+  /** Per text: what `vitrine check` prints. */
+  texts: TextSummary[];
+  cache: { hits: number; misses: number };
+}
+
+export interface TextSummary {
+  id: string;
+  source: string;
+  words: number;
+  chapters: { number: number; title: string; words: number; part: string | null }[];
+  cast: { id: string; name: string; mentions: number }[];
+  ambiguous: { text: string; chapter: number; candidates: string[] }[];
+  warnings: Problem[];
+}
+
+interface TextState {
+  job: TextJob;
+  read: ReadText;
+  structure: StructureResult;
+}
+
+export async function prepareExhibit(planPath: string, opts: PrepareOptions): Promise<PrepareResult> {
+  const log = opts.log ?? (() => {});
+  const cache = new ResultCache(opts.cacheDir);
+  const started = performance.now();
+
+  // 1. plan
+  const loaded = await loadPlan(planPath, planRegistry());
+  const problems: Problem[] = [...loaded.problems];
+  const watch = [loaded.file];
+  const empty = (): PrepareResult => ({
+    prepared: null,
+    problems: sortProblems(problems),
+    dir: loaded.dir,
+    watch,
+    texts: [],
+    cache: { ...cache.stats },
+  });
+  if (!loaded.plan || hasErrors(problems)) return empty();
+  const jobs = planJobs(loaded.plan);
+  const language = jobs.exhibit.language;
+
+  // 2. texts
+  const states = new Map<string, TextState>();
+  for (const t of jobs.texts) {
+    watch.push(t.file);
+    const { text, problems: textProblems } = readText(t.file, t.display, t.options, jobs.cast);
+    problems.push(...textProblems.map((p) => ({ ...p, path: p.path ?? t.where.path })));
+    if (!text) continue;
+    const structure = cache.get(key(text.hash, t.options, measures.structure!, {}, jobs.cast, language), () =>
+      measures.structure!.compute(contextOf(text, jobs.cast, language), {}),
+    ) as StructureResult;
+    states.set(t.id, { job: t, read: text, structure });
+  }
+  if (hasErrors(problems)) return empty();
+  for (const s of states.values()) {
+    log(`Read ${s.job.display}: ${s.structure.words.toLocaleString('en-GB')} words in ${s.structure.chapters.length} chapters`);
+  }
+
+  // 3–5. measures, notes, charts
+  const rooms: PreparedRoom[] = [];
+  let computed = 0;
+  for (const room of jobs.rooms) {
+    const panels: PreparedPanel[] = [];
+    for (const job of room.panels) {
+      if (opts.only && !opts.only.includes(job.id)) continue;
+      const state = states.get(job.text)!;
+      const panel = preparePanel(job, state, jobs, cache, problems, language);
+      if (panel) panels.push(panel.panel);
+      if (panel?.computed) computed++;
+    }
+    rooms.push({ id: room.id, title: room.title, intro: room.intro, panels });
+  }
+  const panelCount = rooms.reduce((s, r) => s + r.panels.length, 0);
+  log(
+    `Measured ${panelCount} panel${panelCount === 1 ? '' : 's'}: ${computed} computed, ${panelCount - computed} from the cache (${((performance.now() - started) / 1000).toFixed(2)} s)`,
+  );
+  if (hasErrors(problems)) return empty();
+
+  // 6. assemble
+  const used = [...new Set(rooms.flatMap((r) => r.panels.map((p) => p.measure)))];
+  const methods: PreparedMethod[] = used.map((name) => {
+    const m = measures[name]!;
+    return { name, version: m.version, card: m.method, params: paramDocs(m.params) };
+  });
+  const texts: PreparedText[] = [...states.values()].map((s) => ({
+    id: s.job.id,
+    source: s.job.source,
+    edition: s.job.edition,
+    hash: s.read.hash,
+    words: s.structure.words,
+    chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, part: c.part, words: c.words })),
+  }));
+  const captionFiles = [
+    ...new Set(
+      [jobs.exhibit.intro, jobs.exhibit.rights, ...rooms.map((r) => r.intro), ...rooms.flatMap((r) => r.panels.map((p) => p.caption))].filter(
+        (f): f is string => !!f,
+      ),
+    ),
+  ];
+  const buildHash = hashOf([readFileSync(loaded.file), ...texts.map((t) => t.hash), ...captionFiles.map((f) => readFileSync(`${loaded.dir}/${f}`))]);
+  for (const r of rooms) for (const p of r.panels) p.citation = citation(jobs, p, texts, buildHash);
+  const prepared: PreparedExhibit = {
+    exhibit: { ...jobs.exhibit, base: opts.base ?? jobs.exhibit.base },
+    texts,
+    cast: jobs.cast.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, pronoun: c.pronoun ?? null })),
+    rooms,
+    methods,
+    captionFiles,
+    buildHash,
+    generator: GENERATOR,
+  };
+  return {
+    prepared,
+    problems: sortProblems(problems),
+    dir: loaded.dir,
+    watch,
+    texts: [...states.values()].map((s) => summarise(s, jobs.cast)),
+    cache: { ...cache.stats },
+  };
+}
+
+function contextOf(text: ReadText, cast: CastMember[], language: string): MeasureContext {
+  const { model, mentions } = text.open();
+  return { model, mentions, cast, language };
+}
+
+function key(hash: string, options: TextOptions, m: Measure, params: unknown, cast: CastMember[], language: string): string {
+  return cacheKey({ textHash: hash, textOptions: options, measure: m.name, version: m.version, params, cast: m.needsCast ? cast : null, language });
+}
+
+/** Runs one panel's measure (or recalls it), resolves its notes and draws its chart. */
+export function computePanelResult(
+  job: PanelJob,
+  read: ReadText,
+  textOptions: TextOptions,
+  cast: CastMember[],
+  language: string,
+  cache: ResultCache,
+): unknown {
+  const m = measures[job.measure]!;
+  return cache.get(key(read.hash, textOptions, m, job.params, cast, language), () => m.compute(contextOf(read, cast, language), job.params));
+}
+
+function preparePanel(
+  job: PanelJob,
+  state: TextState,
+  jobs: ExhibitJobs,
+  cache: ResultCache,
+  problems: Problem[],
+  language: string,
+): { panel: PreparedPanel; computed: boolean } | null {
+  const m = measures[job.measure]!;
+  const misses = cache.stats.misses;
+  let result: unknown;
+  try {
+    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache);
+  } catch (e) {
+    problems.push(atWhere(job.measureWhere, 'panel/measure-failed', `the measure "${job.measure}" cannot run with these parameters: ${(e as Error).message}`, 'change the parameters of this panel'));
+    return null;
+  }
+  const data = m.views[job.chart]!(result, job.params);
+  const notes: PinnedNote[] = [];
+  const prepNotes: PreparedNote[] = [];
+  job.notes.forEach((n, i) => {
+    const label = String(i + 1);
+    const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
+    const resolved = resolveNote(n.at, data, state.structure, jobs.cast, segments);
+    if ('problem' in resolved) {
+      problems.push(atWhere(n.where, 'note/unresolved', resolved.problem, resolved.hint));
+      return;
+    }
+    notes.push({ label, text: n.text, at: resolved.at });
+    prepNotes.push({ label, text: n.text, target: resolved.target });
+  });
+  const chart = charts[job.chart]!;
+  const byLabel = new Map(job.notes.map((n, i) => [String(i + 1), n]));
+  const out = (chart.render as (d: ChartData, o: unknown, t?: unknown, n?: readonly PinnedNote[]) => ReturnType<typeof chart.render>)(
+    data,
+    job.options,
+    undefined,
+    notes,
+  );
+  for (const label of out.skippedNotes ?? []) {
+    const n = byLabel.get(label);
+    if (n) problems.push({ ...atWhere(n.where, 'note/not-drawn', 'the note could not be placed on the chart, so it is shown only beside it', 'point it at something the chart draws'), severity: 'warning' });
+  }
+  return {
+    computed: cache.stats.misses > misses,
+    panel: {
+      id: job.id,
+      room: job.room,
+      title: job.title,
+      text: job.text,
+      measure: job.measure,
+      params: job.params,
+      chart: job.chart,
+      options: job.options,
+      svg: out.svg,
+      svgNarrow: out.svgNarrow ?? null,
+      alt: job.alt ?? out.alt,
+      table: m.table(result, job.params),
+      notes: prepNotes,
+      caption: job.caption,
+      data: result,
+      citation: '',
+    },
+  };
+}
+
+type NoteAt = { chapter?: number; character?: string; word?: string; segment?: number };
+
+/** Places a curator's note on the chart's data, or says why it cannot be placed. */
+export function resolveNote(
+  at: NoteAt,
+  data: ChartData,
+  structure: StructureResult,
+  cast: CastMember[],
+  /** How many equal segments the measure counted by, if it did. */
+  segments?: number,
+): { at: PinnedNote['at']; target: string } | { problem: string; hint: string } {
+  if (at.chapter !== undefined) {
+    const ch = structure.chapters[at.chapter - 1];
+    if (!ch) return { problem: `the note points at chapter ${at.chapter}, but the text has ${structure.chapters.length} chapters`, hint: `use a chapter from 1 to ${structure.chapters.length}` };
+    const target = ch.title;
+    if (data.kind === 'bars' && data.categories.includes(ch.title)) return { at: { category: ch.title }, target };
+    if (data.kind === 'lines' && data.points[at.chapter - 1] === ch.title) return { at: { x: at.chapter - 1 }, target };
+    if (data.kind === 'strip') return { at: { x: data.boundaries[at.chapter - 1]?.at ?? 0 }, target };
+    return { at: {}, target };
+  }
+  if (at.character !== undefined) {
+    const member = cast.find((c) => c.id === at.character);
+    if (!member) return { problem: `the note points at the character "${at.character}", who is not in the cast`, hint: 'use a cast id' };
+    const target = member.name;
+    if (data.kind === 'bars' && data.categories.includes(member.name)) return { at: { category: member.name }, target };
+    if (data.kind === 'lines' && data.series.some((s) => s.id === member.id)) return { at: { series: member.id }, target };
+    if (data.kind === 'strip' && data.rows.some((r) => r.id === member.id)) return { at: { category: member.id }, target };
+    return { problem: `the note points at ${member.name}, who is not shown in this chart`, hint: 'point it at a character the chart shows, or at a chapter' };
+  }
+  if (at.word !== undefined) {
+    const w = at.word.toLowerCase();
+    if (data.kind === 'bars' && data.categories.includes(w)) return { at: { category: w }, target: `“${w}”` };
+    if (data.kind === 'lines' && data.series.some((s) => s.id === w)) return { at: { series: w }, target: `“${w}”` };
+    return { problem: `the note points at the word "${at.word}", which this chart does not show`, hint: 'point it at a word the chart shows' };
+  }
+  const seg = at.segment!;
+  if (data.kind === 'lines' && seg <= data.points.length) return { at: { x: seg - 1 }, target: data.points[seg - 1]! };
+  if (data.kind === 'strip' && segments && seg <= segments) {
+    return { at: { x: (seg - 0.5) / segments }, target: `Segment ${seg} of ${segments}` };
+  }
+  return { problem: `the note points at segment ${seg}, which this chart does not show`, hint: 'segments exist only on charts of a measure counted by segment' };
+}
+
+function atWhere(where: Where, code: string, message: string, hint?: string): Problem {
+  return { severity: 'error', code, file: where.file, line: where.line, column: where.column, path: where.path, message, hint };
+}
+
+function citation(jobs: ExhibitJobs, p: PreparedPanel, texts: PreparedText[], buildHash: string): string {
+  const t = texts.find((x) => x.id === p.text);
+  const edition = t?.edition ? `; ${t.edition}` : '';
+  return `${jobs.exhibit.organiser}, “${p.title}”, in ${jobs.exhibit.title} (measure: ${p.measure}${edition}). Build ${buildHash}.`;
+}
+
+function summarise(s: TextState, cast: CastMember[]): TextSummary {
+  const { model, mentions } = s.read.open();
+  const counts = new Array<number>(cast.length).fill(0);
+  for (let k = 0; k < mentions.count; k++) counts[mentions.member[k]!]!++;
+  return {
+    id: s.job.id,
+    source: s.job.display,
+    words: s.structure.words,
+    chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, words: c.words, part: c.part })),
+    cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
+    ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
+    warnings: model.warnings.map((w) => ({
+      severity: 'warning' as const,
+      code: w.code,
+      file: s.job.display,
+      line: w.line,
+      column: w.column,
+      message: w.message,
+    })),
+  };
+}
+
+function hashOf(parts: (string | Uint8Array)[]): string {
+  const h = createHash('sha256');
+  for (const p of parts) h.update(p);
+  return h.digest('hex').slice(0, 12);
+}
+
+export function sortProblems(problems: Problem[]): Problem[] {
+  return [...problems].sort(
+    (a, b) => (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0),
+  );
+}
+
+

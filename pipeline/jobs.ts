@@ -1,0 +1,106 @@
+/**
+ * The resolved plan turned into the work the pipeline does: which texts to
+ * read with which options, and which panels to measure and draw.
+ */
+import { relative } from 'node:path';
+import type { Plan, Where } from './plan/types.ts';
+import type { CastMember, TextOptions } from './text/model.ts';
+
+export type { Where };
+
+export interface TextJob {
+  id: string;
+  /** Absolute path. */
+  file: string;
+  /** As written in the plan. */
+  source: string;
+  /** As shown in messages: relative to the working directory. */
+  display: string;
+  options: TextOptions;
+  edition: string | null;
+  where: Where;
+}
+
+export interface PanelJob {
+  id: string;
+  room: string;
+  title: string;
+  text: string;
+  measure: string;
+  params: Record<string, unknown>;
+  chart: string;
+  options: Record<string, unknown>;
+  /** Caption file as written (relative to the exhibit folder, normalised). */
+  caption: string;
+  alt: string | null;
+  notes: { at: { chapter?: number; character?: string; word?: string; segment?: number }; text: string; where: Where }[];
+  where: Where;
+  measureWhere: Where;
+}
+
+export interface ExhibitJobs {
+  exhibit: {
+    title: string;
+    subtitle: string | null;
+    organiser: string;
+    language: string;
+    base: string;
+    credit: string | null;
+    intro: string | null;
+    rights: string | null;
+  };
+  texts: TextJob[];
+  cast: CastMember[];
+  rooms: { id: string; title: string; intro: string | null; panels: PanelJob[] }[];
+}
+
+export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
+  const rel = (abs: string) => relative(plan.dir, abs).split('\\').join('/');
+  return {
+    exhibit: {
+      title: plan.exhibit.title,
+      subtitle: plan.exhibit.subtitle ?? null,
+      organiser: plan.exhibit.organiser,
+      language: plan.exhibit.language,
+      base: plan.exhibit.base,
+      credit: plan.exhibit.credit ?? null,
+      intro: plan.exhibit.intro ? rel(plan.exhibit.intro.absolute) : null,
+      rights: plan.exhibit.rights ? rel(plan.exhibit.rights.absolute) : null,
+    },
+    texts: plan.texts.map((t) => ({
+      id: t.id,
+      file: t.source.absolute,
+      source: rel(t.source.absolute),
+      display: relative(cwd, t.source.absolute) || t.source.absolute,
+      options: {
+        id: t.id,
+        ...(t.start !== undefined ? { start: t.start } : {}),
+        ...(t.end !== undefined ? { end: t.end } : {}),
+        ...(t.chapters !== undefined ? { chapterPattern: t.chapters } : {}),
+      },
+      edition: t.edition ?? null,
+      where: t.where,
+    })),
+    cast: plan.cast.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, ...(c.pronoun ? { pronoun: c.pronoun } : {}) })),
+    rooms: plan.rooms.map((r) => ({
+      id: r.id,
+      title: r.title,
+      intro: r.intro ? rel(r.intro.absolute) : null,
+      panels: r.panels.map((p) => ({
+        id: p.id,
+        room: r.id,
+        title: p.title,
+        text: p.text,
+        measure: p.measure,
+        params: p.params as Record<string, unknown>,
+        chart: p.chart,
+        options: p.options as Record<string, unknown>,
+        caption: rel(p.caption.absolute),
+        alt: p.alt ?? null,
+        notes: p.notes.map((n) => ({ at: n.at, text: n.text, where: n.where })),
+        where: p.where,
+        measureWhere: { ...p.where, path: `${p.where.path}.measure` },
+      })),
+    })),
+  };
+}

@@ -1,0 +1,40 @@
+import type { z } from 'zod';
+import type { CastMember, Mentions, TextModel } from '../text/model.ts';
+import type { ChartData, Table } from '../charts/types.ts';
+
+/** A measure's method card: shown on its panel pages and on the methods page. */
+export interface MethodCard {
+  /** What the measure computes, in a sentence or two for a general reader. */
+  what: string;
+  /** The formula or procedure, in plain text (may use Unicode maths). */
+  formula: string;
+  /** Where the method comes from. */
+  source: string;
+  /** What a careful reader should keep in mind. */
+  caveats: string[];
+}
+
+/** Everything a measure may read. Built once per text and shared by its panels. */
+export interface MeasureContext {
+  model: TextModel;
+  cast: CastMember[];
+  mentions: Mentions;
+  /** ISO 639-1 code from the plan. */
+  language: string;
+}
+
+export interface Measure<P = any, R = any> {
+  name: string;
+  /** Bump when the result for the same input changes: it is part of the cache key. */
+  version: number;
+  /** Every parameter with its default, documented with `.describe()`. */
+  params: z.ZodType<P>;
+  /** Whether the measure needs a cast in the plan. */
+  needsCast: boolean;
+  compute(ctx: MeasureContext, params: P): R;
+  method: MethodCard;
+  /** The result as a table: shown beside the chart and offered as CSV/JSON. */
+  table(result: R, params: P): Table;
+  /** The chart kinds this measure can be drawn as, each turning a result into that chart's dataset. */
+  views: Record<string, (result: R, params: P) => ChartData>;
+}

@@ -1,0 +1,87 @@
+/**
+ * The prepared exhibit: everything the site needs, as plain JSON-serialisable
+ * data. It is the one seam between the pipeline and Astro: pages read this
+ * (through the `virtual:vitrine/exhibit` module) and never import measure code.
+ */
+import type { MethodCard } from './measures/types.ts';
+import type { Table } from './charts/types.ts';
+
+export interface PreparedNote {
+  label: string;
+  text: string;
+  /** What the note points at, in words ("Chapter 4: The Flood"). */
+  target: string;
+}
+
+export interface PreparedPanel {
+  id: string;
+  room: string;
+  title: string;
+  text: string;
+  measure: string;
+  params: Record<string, unknown>;
+  chart: string;
+  options: Record<string, unknown>;
+  svg: string;
+  /** The same chart laid out for narrow screens (about 360 px), when the chart kind has one. */
+  svgNarrow: string | null;
+  alt: string;
+  table: Table;
+  notes: PreparedNote[];
+  /** Caption file, relative to the exhibit folder (as written in the plan). */
+  caption: string;
+  /** The measure's result: offered as the JSON download. */
+  data: unknown;
+  /** One-line citation of the panel. */
+  citation: string;
+}
+
+export interface PreparedRoom {
+  id: string;
+  title: string;
+  intro: string | null;
+  panels: PreparedPanel[];
+}
+
+export interface PreparedParamDoc {
+  key: string;
+  description: string;
+}
+
+export interface PreparedMethod {
+  name: string;
+  version: number;
+  card: MethodCard;
+  params: PreparedParamDoc[];
+}
+
+export interface PreparedText {
+  id: string;
+  source: string;
+  edition: string | null;
+  hash: string;
+  words: number;
+  chapters: { number: number; title: string; part: string | null; words: number }[];
+}
+
+export interface PreparedExhibit {
+  exhibit: {
+    title: string;
+    subtitle: string | null;
+    organiser: string;
+    language: string;
+    base: string;
+    credit: string | null;
+    intro: string | null;
+    rights: string | null;
+  };
+  texts: PreparedText[];
+  cast: { id: string; name: string; aliases: string[]; pronoun: string | null }[];
+  rooms: PreparedRoom[];
+  methods: PreparedMethod[];
+  /** Caption and intro files the site renders, relative to the exhibit folder. */
+  captionFiles: string[];
+  /** Short hash of everything the exhibit was built from. */
+  buildHash: string;
+  generator: string;
+}

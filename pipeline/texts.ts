@@ -1,0 +1,94 @@
+/**
+ * Reading the texts a plan names: decode, build the text model, find the cast.
+ * Models are kept in memory for the life of the process, keyed by the text's
+ * bytes and reading options, so the CLI and the Astro integration (which run
+ * the pipeline in one process, through different module loaders) share them.
+ */
+import { readFileSync } from 'node:fs';
+import { createHash } from 'node:crypto';
+import { decodeText } from './text/decode.ts';
+import { buildTextModel } from './text/build.ts';
+import { findMentions } from './text/mentions.ts';
+import type { CastMember, Mentions, TextModel, TextOptions } from './text/model.ts';
+import type { Problem } from './problems.ts';
+import { stableJson } from './cache/cache.ts';
+
+export interface OpenedText {
+  model: TextModel;
+  mentions: Mentions;
+}
+
+type Memo = Map<string, OpenedText>;
+const MEMO_KEY = Symbol.for('vitrine.text-models');
+const memo: Memo = ((globalThis as Record<symbol, unknown>)[MEMO_KEY] ??= new Map()) as Memo;
+
+/** sha256 of a file's bytes. */
+export function hashBytes(bytes: Uint8Array): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
+
+export interface ReadText {
+  /** sha256 of the file's bytes. */
+  hash: string;
+  /** Builds (or recalls) the model and the cast mentions: only called when a measure needs them. */
+  open(): OpenedText;
+}
+
+/**
+ * Reads a text file. Problems (unreadable file, invalid UTF-8) are returned
+ * with the file, line and column; the model itself is built lazily.
+ */
+export function readText(
+  file: string,
+  displayName: string,
+  options: TextOptions,
+  cast: CastMember[],
+): { text: ReadText | null; problems: Problem[] } {
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(file);
+  } catch (e) {
+    return {
+      text: null,
+      problems: [
+        {
+          severity: 'error',
+          code: 'text/unreadable',
+          file: displayName,
+          message: `the text file cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`,
+          hint: 'check the path in the plan and the file permissions',
+        },
+      ],
+    };
+  }
+  const hash = hashBytes(bytes);
+  const key = hash + stableJson({ options, cast });
+  const seen = memo.get(key);
+  if (seen) return { text: { hash, open: () => seen }, problems: [] };
+  const decoded = decodeText(bytes, displayName);
+  if ('problem' in decoded) {
+    return {
+      text: null,
+      problems: [
+        {
+          severity: 'error',
+          code: 'text/not-utf8',
+          file: displayName,
+          line: decoded.problem.line,
+          column: decoded.problem.column,
+          message: decoded.problem.message,
+        },
+      ],
+    };
+  }
+  const open = (): OpenedText => {
+    let opened = memo.get(key);
+    if (!opened) {
+      const model = buildTextModel(decoded.text, options);
+      opened = { model, mentions: findMentions(model, cast) };
+      memo.set(key, opened);
+    }
+    return opened;
+  };
+  return { text: { hash, open }, problems: [] };
+}
