@@ -1,0 +1,67 @@
+/**
+ * The one seam between the pipeline and Astro. At config time it prepares the
+ * exhibit (plan → text model → measures → charts), sets the site's base path,
+ * serves the prepared exhibit to pages as `virtual:vitrine/exhibit`, and
+ * watches the plan and texts so `astro dev` recomputes when they change.
+ */
+import type { AstroIntegration } from 'astro';
+import { resolve } from 'node:path';
+import { prepareExhibit } from '../pipeline/exhibit.ts';
+import type { PreparedExhibit } from '../pipeline/prepared.ts';
+import { formatProblem } from '../pipeline/problems.ts';
+
+const MODULE_ID = 'virtual:vitrine/exhibit';
+const RESOLVED_ID = '\0' + MODULE_ID;
+
+export interface VitrineOptions {
+  /** The exhibit plan. Default: $VITRINE_PLAN, else "content/exhibit.yaml". */
+  plan?: string;
+  /** Where measure results are cached. Default: ".vitrine/cache" beside the plan's folder. */
+  cacheDir?: string;
+}
+
+export default function vitrine(options: VitrineOptions = {}): AstroIntegration {
+  let prepared: PreparedExhibit | null = null;
+  return {
+    name: 'vitrine',
+    hooks: {
+      'astro:config:setup': async ({ updateConfig, addWatchFile, logger, config }) => {
+        const root = config.root instanceof URL ? config.root.pathname : String(config.root);
+        const planPath = resolve(root, process.env.VITRINE_PLAN ?? options.plan ?? 'content/exhibit.yaml');
+        const envCache = process.env.VITRINE_CACHE_DIR;
+        // An empty VITRINE_CACHE_DIR means "no cache" (vitrine build --no-cache).
+        const cacheDir = envCache !== undefined ? envCache || null : (options.cacheDir ?? resolve(root, '.vitrine/cache'));
+        const base = process.env.VITRINE_BASE || undefined;
+        const result = await prepareExhibit(planPath, { cacheDir, base, log: (m) => logger.info(m) });
+        for (const p of result.problems) {
+          if (p.severity === 'warning') logger.warn(formatProblem(p));
+        }
+        for (const file of result.watch) addWatchFile(file);
+        if (!result.prepared) {
+          const errors = result.problems.filter((p) => p.severity === 'error').map(formatProblem);
+          throw new Error(`The exhibit cannot be built:\n${errors.join('\n')}`);
+        }
+        prepared = result.prepared;
+        // Read by site/content.config.ts: which caption files to render, and from where.
+        process.env.VITRINE_EXHIBIT_DIR = result.dir;
+        process.env.VITRINE_CAPTIONS = JSON.stringify(prepared.captionFiles);
+        updateConfig({
+          base: prepared.exhibit.base,
+          vite: {
+            plugins: [
+              {
+                name: 'vitrine-exhibit',
+                resolveId(id: string) {
+                  return id === MODULE_ID ? RESOLVED_ID : undefined;
+                },
+                load(id: string) {
+                  return id === RESOLVED_ID ? `export default ${JSON.stringify(prepared)};` : undefined;
+                },
+              },
+            ],
+          },
+        });
+      },
+    },
+  };
+}
