@@ -11,8 +11,8 @@
  * 2 the command line is wrong; 3 an unexpected internal failure.
  */
 import { parseArgs } from 'node:util';
-import { existsSync, mkdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
+import { cpSync, existsSync, mkdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
 import { z } from 'zod';
@@ -71,6 +71,9 @@ const defaultIo: Io = {
 
 export async function main(argv: string[], io: Io = defaultIo): Promise<number> {
   process.env.ASTRO_TELEMETRY_DISABLED = '1';
+  // Vite reads these names from the environment into import.meta.env, where a stray
+  // BASE_URL (set by a test runner or a shell profile) would override the exhibit's base path.
+  for (const name of ['BASE_URL', 'MODE', 'DEV', 'PROD', 'SSR']) delete process.env[name];
   let args: ReturnType<typeof parse>;
   try {
     args = parse(argv);
@@ -324,10 +327,15 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     return EXIT.problems;
   }
   report(result.problems, io);
-  const work = resolve(dirname(out), `.vitrine-build-${process.pid}-${Date.now()}`);
+  // Astro's prerender step imports packages from the build folder, so it must sit inside the
+  // project (where node_modules resolves); it is moved beside the output folder afterwards.
+  const work = resolve(ROOT, '.vitrine/builds', `${process.pid}-${Date.now()}`);
   const env = { VITRINE_PLAN: plan, VITRINE_OUT_DIR: work, VITRINE_CACHE_DIR: cacheDir(values) ?? '', VITRINE_BASE: values.base ?? '' };
   const saved = Object.fromEntries(Object.keys(env).map((k) => [k, process.env[k]]));
   Object.assign(process.env, env);
+  // Astro resolves some of its working folders from the current directory: build from the project.
+  const cwd = process.cwd();
+  process.chdir(ROOT);
   try {
     const astro = await import('astro');
     await astro.build({ root: ROOT, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
@@ -337,6 +345,7 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     io.err(`The site build failed: ${(e as Error).message}\nNothing was changed in ${out}.\n`);
     return EXIT.problems;
   } finally {
+    process.chdir(cwd);
     for (const [k, v] of Object.entries(saved)) {
       if (v === undefined) delete process.env[k];
       else process.env[k] = v;
@@ -348,16 +357,30 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
   return EXIT.ok;
 }
 
-/** Replace `out` with the freshly built `work` folder: rename old away, rename new in, then delete old. */
+/**
+ * Replace `out` with the freshly built `work` folder. The new site is first
+ * moved (or, across file systems, copied) beside `out`; then two renames on
+ * the same file system swap it in, and only then is the old site deleted.
+ */
 function swapInto(work: string, out: string): void {
   mkdirSync(dirname(out), { recursive: true });
-  const old = `${work}-previous`;
+  const stamp = `${process.pid}-${Date.now()}`;
+  const staged = join(dirname(out), `.${basename(out)}.new-${stamp}`);
+  const old = join(dirname(out), `.${basename(out)}.old-${stamp}`);
+  try {
+    renameSync(work, staged);
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'EXDEV') throw e;
+    cpSync(work, staged, { recursive: true });
+    rmSync(work, { recursive: true, force: true });
+  }
   const had = existsSync(out);
   if (had) renameSync(out, old);
   try {
-    renameSync(work, out);
+    renameSync(staged, out);
   } catch (e) {
     if (had) renameSync(old, out);
+    rmSync(staged, { recursive: true, force: true });
     throw e;
   }
   if (had) rmSync(old, { recursive: true, force: true });
@@ -375,6 +398,7 @@ async function dev(rest: string[], values: Values, io: Io): Promise<number> {
   if (c) process.env.VITRINE_CACHE_DIR = c;
   const port = values.port ? Number(values.port) : 4321;
   if (!Number.isInteger(port) || port < 1 || port > 65535) throw new UsageError(`--port must be a port number, not "${values.port}"`);
+  process.chdir(ROOT);
   const astro = await import('astro');
   const server = await astro.dev({ root: ROOT, server: { port, host: '127.0.0.1' }, logLevel: values.quiet ? 'error' : 'info' });
   io.out(`Previewing ${result.prepared!.exhibit.title} at http://127.0.0.1:${server.address.port}${result.prepared!.exhibit.base} — edits to the plan, captions and text are picked up. Ctrl+C stops.\n`);
