@@ -56,6 +56,8 @@ export interface LinesData {
   ticks: string[];
   series: { id: string; name: string; values: number[] }[];
   format: 'count' | 'share' | 'decimal';
+  /** Optional bands drawn behind their series. */
+  bands?: LinesBand[];
 }
 
 /** A dispersion strip: one row per term or character, a mark at every occurrence along the text. */
@@ -69,7 +71,112 @@ export interface StripData {
   totalTokens: number;
 }
 
-export type ChartData = BarsData | LinesData | StripData;
+/** Lines over narrative time may carry a band (e.g. the spread behind a smoothed arc). */
+export interface LinesBand {
+  /** The series the band belongs to. */
+  series: string;
+  low: number[];
+  high: number[];
+}
+
+/** A heatmap: rows × columns of values, in the order given (measures order them). */
+export interface MatrixData {
+  kind: 'matrix';
+  title: string;
+  rowLabel: string;
+  columnLabel: string;
+  rows: { id: string; name: string }[];
+  columns: { id: string; name: string }[];
+  /** values[r][c]. */
+  values: number[][];
+  valueLabel: string;
+  format: 'count' | 'share' | 'decimal';
+}
+
+/** A network: nodes with a size measure and a community, weighted edges. */
+export interface NetworkData {
+  kind: 'network';
+  title: string;
+  nodes: { id: string; name: string; size: number; community: number }[];
+  edges: { source: string; target: string; weight: number }[];
+  /** What node size shows, e.g. "Weighted degree". */
+  sizeLabel: string;
+  /** What edge weight counts, e.g. "Paragraphs shared". */
+  weightLabel: string;
+}
+
+/** A word tree: a hierarchy of continuations from a root phrase (d3-hierarchy ready). */
+export interface TreeNode {
+  word: string;
+  count: number;
+  children: TreeNode[];
+}
+export interface TreeData {
+  kind: 'tree';
+  title: string;
+  root: TreeNode;
+  /** 'right' when the tree shows what follows the phrase, 'left' for what precedes it. */
+  direction: 'right' | 'left';
+}
+
+/** Keyword-in-context lines, the keyword aligned on a centre axis. */
+export interface KwicData {
+  kind: 'kwic';
+  title: string;
+  keyword: string;
+  lines: { left: string; keyword: string; right: string; where: string }[];
+}
+
+/** Running text where each word or phrase carries a value encoded by type size, weight or colour. */
+export interface TextmapData {
+  kind: 'textmap';
+  title: string;
+  /** What the value means, e.g. "Valence (AFINN-165)". */
+  valueLabel: string;
+  /** Value range for the legend, e.g. [-5, 5]. */
+  domain: [number, number];
+  /** Spans in reading order; `value` null for plain text (spaces and punctuation included in `text`). */
+  spans: { text: string; value: number | null }[];
+  /** Optional paragraph breaks: indices into `spans` where a new paragraph starts. */
+  breaks?: number[];
+}
+
+/** Small multiples: one simple chart per chapter or per character, on shared scales. */
+export interface MultiplesData {
+  kind: 'multiples';
+  title: string;
+  panels: { id: string; title: string; data: BarsData | LinesData }[];
+}
+
+/** A scatter plot of labelled points. */
+export interface ScatterData {
+  kind: 'scatter';
+  title: string;
+  xLabel: string;
+  yLabel: string;
+  points: { id: string; label: string; x: number; y: number; group?: string }[];
+}
+
+/** A treemap of labelled values, optionally grouped. */
+export interface TreemapData {
+  kind: 'treemap';
+  title: string;
+  valueLabel: string;
+  items: { id: string; label: string; value: number; group?: string }[];
+}
+
+export type ChartData =
+  | BarsData
+  | LinesData
+  | StripData
+  | MatrixData
+  | NetworkData
+  | TreeData
+  | KwicData
+  | TextmapData
+  | MultiplesData
+  | ScatterData
+  | TreemapData;
 
 export interface ChartOutput {
   svg: string;

@@ -14,6 +14,23 @@ export interface MethodCard {
   caveats: string[];
 }
 
+/** A curator-supplied word list: word (lower-cased) → the categories it belongs to. */
+export interface WordCategories {
+  /** The lexicon's id in the plan. */
+  id: string;
+  /** Every category named in the file, in first-seen order. */
+  categories: string[];
+  entries: Record<string, string[]>;
+}
+
+/** The plan's settings for reading dialogue in a text. */
+export interface DialogueSettings {
+  /** Speech verbs added to the built-in list ("said", "asked", …). */
+  verbs: string[];
+  /** Curator corrections: the quotation in `chapter` (1-based) whose words start with `startsWith`. */
+  pins: { chapter: number; startsWith: string; speaker: string | null; addressee?: string | null }[];
+}
+
 /** Everything a measure may read. Built once per text and shared by its panels. */
 export interface MeasureContext {
   model: TextModel;
@@ -21,6 +38,10 @@ export interface MeasureContext {
   mentions: Mentions;
   /** ISO 639-1 code from the plan. */
   language: string;
+  /** Word lists the plan names, parsed, by id. Default: none. */
+  lexicons?: Record<string, WordCategories>;
+  /** Dialogue settings of the text. Default: no extra verbs, no pins. */
+  dialogue?: DialogueSettings;
 }
 
 export interface Measure<P = any, R = any> {
