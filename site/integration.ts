@@ -22,21 +22,24 @@ export interface VitrineOptions {
 
 export default function vitrine(options: VitrineOptions = {}): AstroIntegration {
   let prepared: PreparedExhibit | null = null;
+  let watch: string[] = [];
+  let prepare: (() => ReturnType<typeof prepareExhibit>) | null = null;
   return {
     name: 'vitrine',
     hooks: {
-      'astro:config:setup': async ({ updateConfig, addWatchFile, logger, config }) => {
+      'astro:config:setup': async ({ updateConfig, logger, config }) => {
         const root = config.root instanceof URL ? config.root.pathname : String(config.root);
         const planPath = resolve(root, process.env.VITRINE_PLAN ?? options.plan ?? 'content/exhibit.yaml');
         const envCache = process.env.VITRINE_CACHE_DIR;
         // An empty VITRINE_CACHE_DIR means "no cache" (vitrine build --no-cache).
         const cacheDir = envCache !== undefined ? envCache || null : (options.cacheDir ?? resolve(root, '.vitrine/cache'));
         const base = process.env.VITRINE_BASE || undefined;
-        const result = await prepareExhibit(planPath, { cacheDir, base, log: (m) => logger.info(m) });
+        prepare = () => prepareExhibit(planPath, { cacheDir, base, log: (m) => logger.info(m) });
+        const result = await prepare();
         for (const p of result.problems) {
           if (p.severity === 'warning') logger.warn(formatProblem(p));
         }
-        for (const file of result.watch) addWatchFile(file);
+        watch = result.watch;
         if (!result.prepared) {
           const errors = result.problems.filter((p) => p.severity === 'error').map(formatProblem);
           throw new Error(`The exhibit cannot be built:\n${errors.join('\n')}`);
@@ -61,6 +64,41 @@ export default function vitrine(options: VitrineOptions = {}): AstroIntegration 
             ],
           },
         });
+      },
+
+      // Live preview: the plan and texts are not modules Vite knows, so watch them here. A
+      // change re-prepares the exhibit (the cache makes that quick) and reloads the page; a
+      // plan with problems keeps the last good exhibit on screen and shows the problems.
+      'astro:server:setup': ({ server, logger }) => {
+        server.watcher.add(watch);
+        const onChange = async (file: string) => {
+          if (!watch.includes(resolve(file)) || !prepare) return;
+          const result = await prepare();
+          if (!result.prepared) {
+            const errors = result.problems.filter((p) => p.severity === 'error').map(formatProblem).join('\n');
+            logger.error(`The exhibit has problems; still showing the last good version:\n${errors}`);
+            server.ws.send({ type: 'error', err: { message: `The exhibit has problems:\n${errors}`, stack: '' } });
+            return;
+          }
+          const before = prepared!;
+          prepared = result.prepared;
+          watch = result.watch;
+          server.watcher.add(watch);
+          const sameCaptions = JSON.stringify(before.captionFiles) === JSON.stringify(prepared.captionFiles);
+          if (!sameCaptions || before.exhibit.base !== prepared.exhibit.base) {
+            // New caption files or a new base path change Astro's own configuration.
+            await server.restart();
+            return;
+          }
+          for (const env of Object.values(server.environments)) {
+            const mod = env.moduleGraph.getModuleById(RESOLVED_ID);
+            if (mod) env.moduleGraph.invalidateModule(mod);
+          }
+          logger.info('Exhibit updated.');
+          server.ws.send({ type: 'full-reload' });
+        };
+        server.watcher.on('change', onChange);
+        server.watcher.on('add', onChange);
       },
     },
   };

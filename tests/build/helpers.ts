@@ -12,12 +12,19 @@ export interface Run {
   stderr: string;
 }
 
+/** The environment a curator's shell would have: without the test runner's own variables. */
+export function cleanEnv(extra: Record<string, string> = {}): NodeJS.ProcessEnv {
+  const env: NodeJS.ProcessEnv = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', ...extra };
+  for (const k of Object.keys(env)) if (k.startsWith('VITEST') || k === 'TEST' || k === 'NODE_ENV') delete env[k];
+  return env;
+}
+
 /** Runs the vitrine CLI as a curator would, in `cwd`. */
 export function vitrine(args: string[], cwd = ROOT, env: Record<string, string> = {}): Run {
   const r = spawnSync(process.execPath, [join(ROOT, 'bin/vitrine.mjs'), ...args], {
     cwd,
     encoding: 'utf8',
-    env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', ...env },
+    env: cleanEnv(env),
     maxBuffer: 64 * 1024 * 1024,
   });
   return { status: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
