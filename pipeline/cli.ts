@@ -275,10 +275,17 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
   return EXIT.ok;
 }
 
-/** `--param` values: numbers, booleans and JSON arrays are read as such, anything else as text. */
+/** `--param` values: numbers, booleans and JSON arrays or objects are read as such, anything else as text. */
 function parseValue(v: string): unknown {
   if (/^-?\d+(\.\d+)?$/.test(v)) return Number(v);
   if (v === 'true' || v === 'false') return v === 'true';
+  if (/^\{.*\}$/.test(v)) {
+    try {
+      return JSON.parse(v);
+    } catch {
+      return v;
+    }
+  }
   if (/^\[.*\]$/.test(v)) {
     try {
       return JSON.parse(v);

@@ -19,7 +19,8 @@ import type { Problem } from './problems.ts';
 import { hasErrors } from './problems.ts';
 import { planRegistry } from './registry.ts';
 import { measures } from './measures/registry.ts';
-import type { Measure, MeasureContext } from './measures/types.ts';
+import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
+import { readLexicons } from './read-lexicons.ts';
 import { charts } from './charts/index.ts';
 import type { ChartData, PinnedNote } from './charts/types.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
@@ -92,6 +93,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   });
   if (!loaded.plan || hasErrors(problems)) return empty();
   const jobs = planJobs(loaded.plan);
+  watch.push(...jobs.lexicons.map((l) => l.file));
   const language = jobs.exhibit.language;
 
   // 2. texts
@@ -106,6 +108,15 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     ) as StructureResult;
     states.set(t.id, { job: t, read: text, structure });
   }
+  const lexicons = readLexicons(jobs.lexicons, problems);
+  for (const room of jobs.rooms) {
+    for (const p of room.panels) {
+      const named = p.params.lexicon;
+      if (typeof named === 'string' && !lexicons[named] && !jobs.lexicons.some((l) => l.id === named)) {
+        problems.push(atWhere({ ...p.where, path: `${p.where.path}.params.lexicon` }, 'plan/unknown-lexicon', `unknown word list "${named}"`, jobs.lexicons.length ? `the plan's word lists are: ${jobs.lexicons.map((l) => l.id).join(', ')}` : 'add a "lexicons:" list naming the file (id and file)'));
+      }
+    }
+  }
   if (hasErrors(problems)) return empty();
   for (const s of states.values()) {
     log(`Read ${s.job.display}: ${s.structure.words.toLocaleString('en-GB')} words in ${s.structure.chapters.length} chapters`);
@@ -119,7 +130,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     for (const job of room.panels) {
       if (opts.only && !opts.only.includes(job.id)) continue;
       const state = states.get(job.text)!;
-      const panel = preparePanel(job, state, jobs, cache, problems, language);
+      const panel = preparePanel(job, state, jobs, cache, problems, language, lexicons);
       if (panel) panels.push(panel.panel);
       if (panel?.computed) computed++;
     }
@@ -135,7 +146,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   const used = [...new Set(rooms.flatMap((r) => r.panels.map((p) => p.measure)))];
   const methods: PreparedMethod[] = used.map((name) => {
     const m = measures[name]!;
-    return { name, version: m.version, card: m.method, params: paramDocs(m.params) };
+    return { name, version: m.version, card: m.method, params: paramDocs(m.params), credits: m.credits ?? null };
   });
   const texts: PreparedText[] = [...states.values()].map((s) => ({
     id: s.job.id,
@@ -174,13 +185,31 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   };
 }
 
-function contextOf(text: ReadText, cast: CastMember[], language: string): MeasureContext {
-  const { model, mentions } = text.open();
-  return { model, mentions, cast, language };
+/** What a measure may read besides the text: the plan's dialogue settings and word lists. */
+export interface Extras {
+  dialogue?: DialogueSettings;
+  lexicons?: Record<string, WordCategories>;
 }
 
-function key(hash: string, options: TextOptions, m: Measure, params: unknown, cast: CastMember[], language: string): string {
-  return cacheKey({ textHash: hash, textOptions: options, measure: m.name, version: m.version, params, cast: m.needsCast ? cast : null, language });
+function contextOf(text: ReadText, cast: CastMember[], language: string, extras: Extras = {}): MeasureContext {
+  const { model, mentions } = text.open();
+  return { model, mentions, cast, language, ...extras };
+}
+
+function key(hash: string, options: TextOptions, m: Measure, params: unknown, cast: CastMember[], language: string, extras: Extras = {}): string {
+  // Only what can change this measure's result is part of the key: the cast and dialogue
+  // settings for measures that read characters, the word list a parameter names.
+  const lexicon = (params as { lexicon?: unknown } | null)?.lexicon;
+  return cacheKey({
+    textHash: hash,
+    textOptions: options,
+    measure: m.name,
+    version: m.version,
+    params,
+    cast: m.needsCast ? { cast, dialogue: extras.dialogue ?? null } : null,
+    language,
+    ...(typeof lexicon === 'string' ? { lexicon: extras.lexicons?.[lexicon] ?? null } : {}),
+  });
 }
 
 /** Runs one panel's measure (or recalls it), resolves its notes and draws its chart. */
@@ -191,9 +220,12 @@ export function computePanelResult(
   cast: CastMember[],
   language: string,
   cache: ResultCache,
+  extras: Extras = {},
 ): unknown {
   const m = measures[job.measure]!;
-  return cache.get(key(read.hash, textOptions, m, job.params, cast, language), () => m.compute(contextOf(read, cast, language), job.params));
+  return cache.get(key(read.hash, textOptions, m, job.params, cast, language, extras), () =>
+    m.compute(contextOf(read, cast, language, extras), job.params),
+  );
 }
 
 function preparePanel(
@@ -203,12 +235,16 @@ function preparePanel(
   cache: ResultCache,
   problems: Problem[],
   language: string,
+  lexicons: Record<string, WordCategories>,
 ): { panel: PreparedPanel; computed: boolean } | null {
   const m = measures[job.measure]!;
   const misses = cache.stats.misses;
   let result: unknown;
   try {
-    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache);
+    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache, {
+      dialogue: state.job.dialogue,
+      lexicons,
+    });
   } catch (e) {
     problems.push(atWhere(job.measureWhere, 'panel/measure-failed', `the measure "${job.measure}" cannot run with these parameters: ${(e as Error).message}`, 'change the parameters of this panel'));
     return null;

@@ -5,6 +5,7 @@
 import { relative } from 'node:path';
 import type { Plan, Where } from './plan/types.ts';
 import type { CastMember, TextOptions } from './text/model.ts';
+import type { DialogueSettings } from './measures/types.ts';
 
 export type { Where };
 
@@ -18,6 +19,16 @@ export interface TextJob {
   display: string;
   options: TextOptions;
   edition: string | null;
+  dialogue: DialogueSettings;
+  where: Where;
+}
+
+export interface LexiconJob {
+  id: string;
+  /** Absolute path. */
+  file: string;
+  display: string;
+  licence: string | null;
   where: Where;
 }
 
@@ -51,6 +62,7 @@ export interface ExhibitJobs {
   };
   texts: TextJob[];
   cast: CastMember[];
+  lexicons: LexiconJob[];
   rooms: { id: string; title: string; intro: string | null; panels: PanelJob[] }[];
 }
 
@@ -79,7 +91,23 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
         ...(t.chapters !== undefined ? { chapterPattern: t.chapters } : {}),
       },
       edition: t.edition ?? null,
+      dialogue: {
+        verbs: t.dialogue.verbs,
+        pins: t.dialogue.pins.map((p) => ({
+          chapter: p.chapter,
+          startsWith: p.startsWith,
+          speaker: p.speaker,
+          ...(p.addressee !== undefined ? { addressee: p.addressee } : {}),
+        })),
+      },
       where: t.where,
+    })),
+    lexicons: plan.lexicons.map((l) => ({
+      id: l.id,
+      file: l.file.absolute,
+      display: relative(cwd, l.file.absolute) || l.file.absolute,
+      licence: l.licence ?? null,
+      where: l.where,
     })),
     cast: plan.cast.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, ...(c.pronoun ? { pronoun: c.pronoun } : {}) })),
     rooms: plan.rooms.map((r) => ({

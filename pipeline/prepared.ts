@@ -53,6 +53,8 @@ export interface PreparedMethod {
   version: number;
   card: MethodCard;
   params: PreparedParamDoc[];
+  /** Attribution required by data the measure ships with. */
+  credits: string | null;
 }
 
 export interface PreparedText {

@@ -54,6 +54,8 @@ export interface Measure<P = any, R = any> {
   needsCast: boolean;
   compute(ctx: MeasureContext, params: P): R;
   method: MethodCard;
+  /** Attribution that data the measure ships with requires (e.g. a word list's licence); shown in the site's credits. */
+  credits?: string;
   /** The result as a table: shown beside the chart and offered as CSV/JSON. */
   table(result: R, params: P): Table;
   /** The chart kinds this measure can be drawn as, each turning a result into that chart's dataset. */

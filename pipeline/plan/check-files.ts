@@ -28,6 +28,7 @@ function namedFiles(plan: RawRecord): Named[] {
   asList(plan.texts).forEach((text, i) => add(['texts', i, 'source'], asRecord(text)?.source, { what: 'text', mdx: false }));
   asList(plan.rooms).forEach((room, i) => add(['rooms', i, 'intro'], asRecord(room)?.intro, { what: 'room introduction', mdx: true }));
   for (const { panel, path } of panelsOf(plan)) add([...path, 'caption'], panel.caption, { what: 'caption', mdx: true });
+  asList(plan.lexicons).forEach((lex, i) => add(['lexicons', i, 'file'], asRecord(lex)?.file, { what: 'word list', mdx: false }));
   return out;
 }
 

@@ -33,6 +33,7 @@ export function checkUniqueIds(plan: RawRecord, r: Reporter): void {
   reportDuplicates(listed('texts'), 'text', r);
   reportDuplicates(listed('cast'), 'cast', r);
   reportDuplicates(listed('rooms'), 'room', r);
+  reportDuplicates(listed('lexicons'), 'word list', r);
   const panels: Entry[] = [];
   for (const { panel, path } of panelsOf(plan)) {
     const id = asText(panel.id);

@@ -183,5 +183,19 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
       });
     });
   }
+  // Speakers and addressees named by dialogue pins.
+  asList(plan.texts).forEach((t, ti) => {
+    asList(asRecord(asRecord(t)?.dialogue)?.pins).forEach((pin, pi) => {
+      for (const key of ['speaker', 'addressee']) {
+        const id = asText(asRecord(pin)?.[key]);
+        if (id === undefined || castIds.includes(id)) continue;
+        r.report(['texts', ti, 'dialogue', 'pins', pi, key], {
+          code: 'plan/unknown-cast',
+          message: `unknown cast member "${id}"`,
+          hint: hasCast ? suggestionHint(id, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters',
+        });
+      }
+    });
+  });
   return settings;
 }

@@ -85,6 +85,7 @@ export function resolvePlan(input: ResolveInput): Plan {
     exhibit: { ...exhibit, ...(introFile ? { intro: introFile } : {}), ...(rightsFile ? { rights: rightsFile } : {}) },
     texts: data.texts.map((text, t) => ({ ...text, source: file(['texts', t, 'source'], text.source), where: where(['texts', t]) })),
     cast: data.cast.map((member, c) => ({ ...member, where: where(['cast', c]) })),
+    lexicons: data.lexicons.map((lex, l) => ({ ...lex, file: file(['lexicons', l, 'file'], lex.file), where: where(['lexicons', l]) })),
     rooms,
     panels: rooms.flatMap((room) => room.panels),
   };

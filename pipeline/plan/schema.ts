@@ -65,6 +65,33 @@ export const exhibitSchema = z
   })
   .describe('The exhibit as a whole. Required.');
 
+export const pinSchema = z
+  .strictObject({
+    chapter: z.number().int().positive().describe('Chapter of the quotation, 1-based. Required.'),
+    startsWith: text.describe('The first words of the quotation, as printed (without the opening mark). Required.'),
+    speaker: idSchema.nullable().describe('Cast id of who speaks, or null for nobody in the cast. Required.'),
+    addressee: idSchema.nullable().optional().describe('Cast id of who is spoken to, or null. Optional, no default (found by the rules).'),
+  })
+  .describe("A curator's correction: who speaks one quotation.");
+
+export const dialogueSchema = z
+  .strictObject({
+    verbs: z
+      .array(text)
+      .default([])
+      .describe('Speech verbs to add to the built-in list (said, asked, cried, …), in their -ed or present form as printed. Default [] (none).'),
+    pins: z.array(pinSchema).default([]).describe("Curator's corrections of speakers. Default [] (none)."),
+  })
+  .describe('How dialogue is read in this text. Optional.');
+
+export const lexiconSchema = z
+  .strictObject({
+    id: idSchema.describe('Id of the word list; measures name it in their "lexicon" parameter. Required.'),
+    file: filePath.describe('A TSV or CSV file of words and categories, relative to the exhibit folder. Required.'),
+    licence: text.optional().describe('Licence or terms of the word list, shown in the credits. Optional, no default.'),
+  })
+  .describe('A word list the curators supply (e.g. words and the emotions they evoke).');
+
 export const textSchema = z
   .strictObject({
     id: idSchema.describe('Id of the text, unique among texts; panels name it in "text". Required.'),
@@ -90,6 +117,7 @@ export const textSchema = z
       .optional()
       .describe('Chapter-heading pattern: a regular expression matched per line, ignoring case. Optional, no default (headings are found by the text reader).'),
     edition: text.optional().describe('Note on the edition the text was taken from. Optional, no default.'),
+    dialogue: dialogueSchema.default({ verbs: [], pins: [] }),
   })
   .describe('A text the exhibit reads.');
 
@@ -176,6 +204,7 @@ export const planSchema = z
     exhibit: exhibitSchema,
     texts: z.array(textSchema).min(1).describe('The texts the exhibit reads. One or more.'),
     cast: z.array(castMemberSchema).default([]).describe('The characters, for measures that need them. Default [] (no cast).'),
+    lexicons: z.array(lexiconSchema).default([]).describe('Word lists the curators supply. Default [] (none).'),
     rooms: z.array(roomSchema).min(1).describe('The rooms of the exhibit, in order. One or more.'),
   })
   .describe('An exhibit plan: "version: 1", then the exhibit, texts, cast (optional) and rooms sections.');
@@ -192,3 +221,6 @@ export type NoteAnchor = z.output<typeof noteAnchorSchema>;
 export type NoteData = z.output<typeof noteSchema>;
 export type PanelData = z.output<typeof panelSchema>;
 export type RoomData = z.output<typeof roomSchema>;
+export type PinData = z.output<typeof pinSchema>;
+export type DialogueData = z.output<typeof dialogueSchema>;
+export type LexiconData = z.output<typeof lexiconSchema>;

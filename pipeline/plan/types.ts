@@ -5,7 +5,7 @@
  * about it can point there.
  */
 import type { Problem } from '../problems.ts';
-import type { NoteAnchor, Pronoun } from './schema.ts';
+import type { DialogueData, NoteAnchor, Pronoun } from './schema.ts';
 
 /** Where an entry is written in the plan: spread it into a Problem. */
 export interface Where {
@@ -50,6 +50,15 @@ export interface PlanText {
   /** Chapter-heading pattern as written; compiles with the "i" flag. */
   chapters?: string;
   edition?: string;
+  /** Extra speech verbs and curator pins (speakers checked against the cast). */
+  dialogue: DialogueData;
+  where: Where;
+}
+
+export interface PlanLexicon {
+  id: string;
+  file: PlanFile;
+  licence?: string;
   where: Where;
 }
 
@@ -108,6 +117,8 @@ export interface Plan {
   texts: PlanText[];
   /** Default [] (no cast). */
   cast: PlanCastMember[];
+  /** Default [] (none). */
+  lexicons: PlanLexicon[];
   rooms: PlanRoom[];
   /** Every panel of every room, in plan order (the same objects as in `rooms`). */
   panels: PlanPanel[];

@@ -1,0 +1,34 @@
+/**
+ * Reading the word lists a plan names (stage 2 of pipeline/exhibit.ts): each
+ * file is parsed once; every malformed line is reported with its position.
+ */
+import { readFileSync } from 'node:fs';
+import type { LexiconJob } from './jobs.ts';
+import type { WordCategories } from './measures/types.ts';
+import type { Problem } from './problems.ts';
+import { parseCategoryLexicon } from './lexicons/categories.ts';
+
+export function readLexicons(jobs: LexiconJob[], problems: Problem[]): Record<string, WordCategories> {
+  const out: Record<string, WordCategories> = {};
+  for (const job of jobs) {
+    let text: string;
+    try {
+      text = readFileSync(job.file, 'utf8');
+    } catch (e) {
+      problems.push({
+        severity: 'error',
+        code: 'lexicon/unreadable',
+        file: job.display,
+        message: `the word list cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`,
+        hint: 'check the path in the plan',
+      });
+      continue;
+    }
+    const parsed = parseCategoryLexicon(text, job.display, job.id);
+    for (const p of parsed.problems) {
+      problems.push({ severity: 'error', code: 'lexicon/malformed', file: job.display, line: p.line, column: p.column, message: p.message, ...(p.hint ? { hint: p.hint } : {}) });
+    }
+    if (parsed.lexicon) out[job.id] = parsed.lexicon;
+  }
+  return out;
+}
