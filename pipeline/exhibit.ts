@@ -206,7 +206,7 @@ function key(hash: string, options: TextOptions, m: Measure, params: unknown, ca
     measure: m.name,
     version: m.version,
     params,
-    cast: m.needsCast ? { cast, dialogue: extras.dialogue ?? null } : null,
+    cast: (m.readsCast ? m.readsCast(params) : m.needsCast) ? { cast, dialogue: extras.dialogue ?? null } : null,
     language,
     ...(typeof lexicon === 'string' ? { lexicon: extras.lexicons?.[lexicon] ?? null } : {}),
   });

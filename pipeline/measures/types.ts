@@ -52,6 +52,8 @@ export interface Measure<P = any, R = any> {
   params: z.ZodType<P>;
   /** Whether the measure needs a cast in the plan. */
   needsCast: boolean;
+  /** Whether a result with these parameters reads the cast or dialogue settings (part of the cache key). Default: `needsCast`. */
+  readsCast?: (params: P) => boolean;
   compute(ctx: MeasureContext, params: P): R;
   method: MethodCard;
   /** Attribution that data the measure ships with requires (e.g. a word list's licence); shown in the site's credits. */
