@@ -1,6 +1,8 @@
 /**
  * Lines over narrative time: one or several series across the positions of
- * a text (chapters or equal segments), labelled directly at their ends.
+ * a text (chapters or equal segments), labelled directly at their ends. A
+ * series may carry a band (a range around it, such as the spread behind a
+ * smoothed arc), shaded lightly in its colour behind the lines.
  */
 
 import { z } from 'zod';
@@ -46,6 +48,33 @@ function clean(data: LinesData): Values {
   );
 }
 
+/** A band made safe to draw: its series' index, and low/high per position (null where either is missing). */
+interface Band {
+  s: number;
+  low: (number | null)[];
+  high: (number | null)[];
+}
+
+/** The bands whose series is in the data; at most one per series (the first). */
+function cleanBands(data: LinesData): Band[] {
+  const out: Band[] = [];
+  for (const b of data.bands ?? []) {
+    const s = data.series.findIndex((x) => x.id === b.series);
+    if (s === -1 || out.some((o) => o.s === s)) continue;
+    const low: (number | null)[] = [];
+    const high: (number | null)[] = [];
+    data.points.forEach((_, i) => {
+      const lo = b.low?.[i];
+      const hi = b.high?.[i];
+      const ok = typeof lo === 'number' && typeof hi === 'number' && Number.isFinite(lo) && Number.isFinite(hi);
+      low.push(ok ? Math.min(lo, hi) : null);
+      high.push(ok ? Math.max(lo, hi) : null);
+    });
+    out.push({ s, low, high });
+  }
+  return out;
+}
+
 function emptyReason(data: LinesData, values: Values): string | null {
   if (data.points.length === 0) return 'the dataset has no positions along the text.';
   if (data.series.length === 0) return 'the dataset has no series.';
@@ -55,7 +84,7 @@ function emptyReason(data: LinesData, values: Values): string | null {
 
 /* ---------- table and alt text ---------- */
 
-function linesTable(data: LinesData, values: Values): Table {
+function linesTable(data: LinesData, values: Values, bands: readonly Band[] = []): Table {
   const used = new Set(['position']);
   const keys = data.series.map((s) => {
     let key = s.id;
@@ -67,8 +96,12 @@ function linesTable(data: LinesData, values: Values): Table {
     columns: [
       { key: 'position', label: data.xLabel, numeric: false },
       ...data.series.map((s, i) => ({ key: keys[i], label: s.name, numeric: true })),
+      ...bands.flatMap((b) => [
+        { key: `${keys[b.s]}-low`, label: `${data.series[b.s].name} (band, low)`, numeric: true },
+        { key: `${keys[b.s]}-high`, label: `${data.series[b.s].name} (band, high)`, numeric: true },
+      ]),
     ],
-    rows: data.points.map((p, i) => [p, ...values.map((vs) => vs[i])]),
+    rows: data.points.map((p, i) => [p, ...values.map((vs) => vs[i]), ...bands.flatMap((b) => [b.low[i], b.high[i]])]),
   };
 }
 
@@ -173,6 +206,7 @@ function runs(vs: (number | null)[]): number[][] {
 interface Ctx {
   data: LinesData;
   values: Values;
+  bands: readonly Band[];
   opts: LinesOptions;
   theme: Theme;
   notes: readonly { note: PinnedNote; x: number; s: number | null }[];
@@ -202,7 +236,8 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
   const plotTop = y + 6;
   const plotH = narrow ? 200 : 260;
   const plotBottom = plotTop + plotH;
-  const axis = valueAxis(values.flat().filter((v): v is number => v !== null), [plotBottom, plotTop], data.format, narrow ? 4 : 5, opts.zero);
+  const bandValues = ctx.bands.flatMap((b) => [...b.low, ...b.high]).filter((v): v is number => v !== null);
+  const axis = valueAxis([...values.flat().filter((v): v is number => v !== null), ...bandValues], [plotBottom, plotTop], data.format, narrow ? 4 : 5, opts.zero);
   const tickTexts = axis.ticks.map(tickFormatter(axis.ticks, data.format));
   const tickW = Math.max(...tickTexts.map((t) => textWidth(t, small)));
 
@@ -298,6 +333,23 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
     }
     return el('g', { class: 'vt-series', 'data-series': s.id }, [titleEl(s.name), ...g]);
   });
+  if (ctx.bands.length) {
+    const bandMarkup = ctx.bands.map((b) => {
+      const pieces = runs(b.low).filter((run) => run.length > 1);
+      const d = pieces
+        .map((run) => {
+          const top = run.map((i) => [xAt(i), axis.at(b.high[i] as number)] as [number, number]);
+          const bottom = run.map((i) => [xAt(i), axis.at(b.low[i] as number)] as [number, number]).reverse();
+          return `${polylinePath([...top, ...bottom])}Z`;
+        })
+        .join('');
+      const s = data.series[b.s];
+      return d
+        ? el('path', { class: 'vt-band', 'data-series': s.id, d, fill: seriesColour(theme, b.s).mark, 'fill-opacity': 0.16, stroke: 'none' }, titleEl(`${s.name}: band`))
+        : '';
+    });
+    parts.push(el('g', { class: 'vt-bands' }, bandMarkup));
+  }
   parts.push(el('g', { class: 'vt-lines' }, seriesMarkup));
 
   // Direct labels at line ends, nudged apart vertically.
@@ -354,7 +406,8 @@ function renderLines(data: LinesData, options: LinesOptionsInput = {}, theme: Th
   const opts = linesOptions.parse(options);
   const id = chartId('lines', opts.id, data, opts, notes);
   const values = clean(data);
-  const table = linesTable(data, values);
+  const bands = cleanBands(data);
+  const table = linesTable(data, values, bands);
   const reason = emptyReason(data, values);
   if (reason) {
     return {
@@ -376,7 +429,7 @@ function renderLines(data: LinesData, options: LinesOptionsInput = {}, theme: Th
     drawn.map((d) => d.note),
   );
   const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawLines({ data, values, opts, theme, notes: drawn, fmt, width, narrow });
+    const { body, height } = drawLines({ data, values, bands, opts, theme, notes: drawn, fmt, width, narrow });
     return frame({ kind: 'lines', id: svgId, width, height, title: data.title, desc: alt, theme, body });
   };
   return {

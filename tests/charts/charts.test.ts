@@ -23,7 +23,9 @@ const cases: { kind: 'bars' | 'lines' | 'strip'; title: string; render: () => Ch
 
 describe('every chart kind', () => {
   it('is registered under its name', () => {
-    expect(Object.keys(charts).sort()).toEqual(['bars', 'lines', 'strip']);
+    expect(Object.keys(charts).sort()).toEqual(
+      ['bars', 'kwic', 'lines', 'matrix', 'multiples', 'network', 'scatter', 'strip', 'textmap', 'tree', 'treemap'],
+    );
     for (const [name, chart] of Object.entries(charts)) expect(chart.name).toBe(name);
   });
 
