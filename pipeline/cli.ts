@@ -166,7 +166,7 @@ function summaryLine(problems: Problem[]): string {
 async function check(rest: string[], values: Values, io: Io): Promise<number> {
   const plan = planArg(rest);
   const log = values.quiet ? undefined : (m: string) => io.out(m + '\n');
-  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log });
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log, summarise: true });
   const problems = [...result.problems, ...result.texts.flatMap((t) => t.warnings)];
   if (!values.quiet) {
     for (const t of result.texts) printTextSummary(t, io);

@@ -21,6 +21,8 @@ import { planRegistry } from './registry.ts';
 import { measures } from './measures/registry.ts';
 import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
 import { readLexicons } from './read-lexicons.ts';
+import { checkPins } from './dialogue/pins.ts';
+import { findQuotes } from './dialogue/quotes.ts';
 import { charts } from './charts/index.ts';
 import type { ChartData, PinnedNote } from './charts/types.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
@@ -44,6 +46,8 @@ export interface PrepareOptions {
   only?: string[];
   /** Override the plan's base path (e.g. to serve a build from a sub-folder). */
   base?: string;
+  /** Also describe each text for `vitrine check` (chapters, cast mentions, dialogue problems). This builds the text models even when every result is cached. */
+  summarise?: boolean;
 }
 
 export interface PrepareResult {
@@ -117,6 +121,16 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
       }
     }
   }
+  // Curator pins that match no quotation would silently correct nothing.
+  for (const s of states.values()) {
+    if (s.job.dialogue.pins.length === 0) continue;
+    for (const p of checkPins(s.read.open().model, s.job.dialogue, jobs.cast)) {
+      problems.push({
+        ...atWhere({ ...s.job.where, path: `${s.job.where.path}.dialogue.pins[${p.pin}]` }, `dialogue/pin-${p.reason}`, p.message),
+        severity: p.reason === 'several' ? 'warning' : 'error',
+      });
+    }
+  }
   if (hasErrors(problems)) return empty();
   for (const s of states.values()) {
     log(`Read ${s.job.display}: ${s.structure.words.toLocaleString('en-GB')} words in ${s.structure.chapters.length} chapters`);
@@ -180,7 +194,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     problems: sortProblems(problems),
     dir: loaded.dir,
     watch,
-    texts: [...states.values()].map((s) => summarise(s, jobs.cast)),
+    texts: opts.summarise ? [...states.values()].map((s) => summarise(s, jobs.cast)) : [],
     cache: { ...cache.stats },
   };
 }
@@ -362,14 +376,26 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
     chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, words: c.words, part: c.part })),
     cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
     ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
-    warnings: model.warnings.map((w) => ({
-      severity: 'warning' as const,
-      code: w.code,
-      file: s.job.display,
-      line: w.line,
-      column: w.column,
-      message: w.message,
-    })),
+    warnings: [
+      ...model.warnings.map((w) => ({
+        severity: 'warning' as const,
+        code: w.code,
+        file: s.job.display,
+        line: w.line,
+        column: w.column,
+        message: w.message,
+      })),
+      // Unbalanced quotation marks: the rest of the text is still read.
+      ...(cast.length
+        ? findQuotes(model, s.job.dialogue.verbs).problems.map((q) => ({
+            severity: 'warning' as const,
+            code: 'dialogue/unbalanced',
+            file: s.job.display,
+            line: q.line,
+            message: `chapter ${q.chapter}, paragraph ${q.paragraph}: ${q.message}`,
+          }))
+        : []),
+    ],
   };
 }
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Measure, MeasureContext } from './types.ts';
-import type { BarsData, LinesData, MultiplesData } from '../charts/types.ts';
+import type { BarsData, LinesData, TreemapData, MultiplesData } from '../charts/types.ts';
 import { TOKEN_FLAGS } from '../text/model.ts';
 import { hasStopwords, stopwords } from './stopwords.ts';
 import { chapterTick } from './labels.ts';
@@ -130,6 +130,14 @@ export const frequency: Measure<FrequencyParams, FrequencyResult> = {
     };
   },
   views: {
+    treemap(result): TreemapData {
+      return {
+        kind: 'treemap',
+        title: `Most frequent words — ${result.scope.title}`,
+        valueLabel: 'Occurrences',
+        items: result.words.map((w) => ({ id: w.word, label: w.word, value: w.count })),
+      };
+    },
     bars(result): BarsData {
       return {
         kind: 'bars',

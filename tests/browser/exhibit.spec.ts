@@ -35,7 +35,7 @@ test.describe('the demo exhibit in a browser', () => {
   });
 
   test('every page has no accessibility violations (axe-core)', async ({ page }) => {
-    test.setTimeout(120_000);
+    test.setTimeout(420_000);
     await page.goto(BASE);
     const links = new Set<string>([BASE]);
     for (const a of await page.locator('a[href]').all()) {
@@ -56,6 +56,21 @@ test.describe('the demo exhibit in a browser', () => {
       const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
       const summary = results.violations.map((v) => `${link}: ${v.id} (${v.nodes.length}) ${v.help}`);
       expect(summary).toEqual([]);
+    }
+  });
+
+  test('the dialogue panels show a speaker bar chart, a conversation matrix and a network', async ({ page }) => {
+    for (const [path, kind] of [
+      ['voices/who-speaks/', 'bars'],
+      ['voices/who-speaks-to-whom/', 'matrix'],
+      ['voices/the-web-of-the-staithe/', 'network'],
+    ] as const) {
+      await page.goto(BASE + path);
+      const chart = page.locator(`figure.chart svg[data-chart="${kind}"]`).locator('visible=true');
+      await expect(chart).toHaveCount(1);
+      // Its data table lists the cast members the chart draws.
+      await expect(page.locator('table.data tbody tr')).not.toHaveCount(0);
+      await expect(page.locator('.method-card h2')).toContainText(path.includes('network') ? 'network' : path.includes('whom') ? 'conversation' : 'speech');
     }
   });
 

@@ -69,6 +69,26 @@ describe('vitrine check', () => {
   });
 });
 
+describe('vitrine check: dialogue pins and word lists', () => {
+  it('reports a pin that matches no quotation, at the pin in the plan', () => {
+    const { plan } = copy();
+    replaceIn(plan, '    edition:', '    dialogue:\n      pins:\n        - { chapter: 2, startsWith: "No such words are spoken", speaker: tamsin }\n    edition:');
+    const r = vitrine(['check', plan]);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toMatch(/exhibit\.yaml:\d+:\d+ texts\[0\]\.dialogue\.pins\[0\]: .*No such words are spoken/);
+  });
+
+  it('reports a malformed word list line with its position', () => {
+    const { dir, plan } = copy();
+    const list = parseYaml(readFileSync(plan, 'utf8')).lexicons?.[0]?.file as string | undefined;
+    expect(list).toBeDefined();
+    writeFileSync(join(dir, 'content', list!), 'word\tcategory\nflood\tfear\nthis line has no tab\n');
+    const r = vitrine(['check', plan]);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toMatch(new RegExp(`${list!.replace(/[./]/g, '\\$&')}:3(:\\d+)?`));
+  });
+});
+
 describe('vitrine measure', () => {
   it('prints the data behind a panel as JSON and CSV', () => {
     const panel = demoPanels.find((p) => p.measure === 'structure')!;
