@@ -326,25 +326,19 @@ export function resolveNote(
   if (at.chapter !== undefined) {
     const ch = structure.chapters[at.chapter - 1];
     if (!ch) return { problem: `the note points at chapter ${at.chapter}, but the text has ${structure.chapters.length} chapters`, hint: `use a chapter from 1 to ${structure.chapters.length}` };
-    const target = ch.title;
-    if (data.kind === 'bars' && data.categories.includes(ch.title)) return { at: { category: ch.title }, target };
-    if (data.kind === 'lines' && data.points[at.chapter - 1] === ch.title) return { at: { x: at.chapter - 1 }, target };
-    if (data.kind === 'strip') return { at: { x: data.boundaries[at.chapter - 1]?.at ?? 0 }, target };
-    return { at: {}, target };
+    return placeChapter(at.chapter, ch.title, data);
   }
   if (at.character !== undefined) {
     const member = cast.find((c) => c.id === at.character);
     if (!member) return { problem: `the note points at the character "${at.character}", who is not in the cast`, hint: 'use a cast id' };
-    const target = member.name;
-    if (data.kind === 'bars' && data.categories.includes(member.name)) return { at: { category: member.name }, target };
-    if (data.kind === 'lines' && data.series.some((s) => s.id === member.id)) return { at: { series: member.id }, target };
-    if (data.kind === 'strip' && data.rows.some((r) => r.id === member.id)) return { at: { category: member.id }, target };
+    const placed = placeNamed([member.id, member.name], data);
+    if (placed) return { at: placed, target: member.name };
     return { problem: `the note points at ${member.name}, who is not shown in this chart`, hint: 'point it at a character the chart shows, or at a chapter' };
   }
   if (at.word !== undefined) {
     const w = at.word.toLowerCase();
-    if (data.kind === 'bars' && data.categories.includes(w)) return { at: { category: w }, target: `“${w}”` };
-    if (data.kind === 'lines' && data.series.some((s) => s.id === w)) return { at: { series: w }, target: `“${w}”` };
+    const placed = placeNamed([w, at.word], data) ?? placeInText(w, data);
+    if (placed) return { at: placed, target: `“${at.word}”` };
     return { problem: `the note points at the word "${at.word}", which this chart does not show`, hint: 'point it at a word the chart shows' };
   }
   const seg = at.segment!;
@@ -353,6 +347,97 @@ export function resolveNote(
     return { at: { x: (seg - 0.5) / segments }, target: `Segment ${seg} of ${segments}` };
   }
   return { problem: `the note points at segment ${seg}, which this chart does not show`, hint: 'segments exist only on charts of a measure counted by segment' };
+}
+
+/** A chapter on a chart: its bar, its point, its boundary, or the small multiple drawn for it. */
+function placeChapter(n: number, title: string, data: ChartData): { at: PinnedNote['at']; target: string } {
+  switch (data.kind) {
+    case 'bars':
+      if (data.categories.includes(title)) return { at: { category: title }, target: title };
+      break;
+    case 'lines':
+      if (data.points[n - 1] === title) return { at: { x: n - 1 }, target: title };
+      break;
+    case 'strip':
+      return { at: { x: data.boundaries[n - 1]?.at ?? 0 }, target: title };
+    case 'multiples': {
+      const panel = data.panels.find((p) => p.title === title);
+      if (panel) return { at: { category: panel.id }, target: title };
+      break;
+    }
+    case 'matrix': {
+      const row = [...data.rows, ...data.columns].find((r) => r.name === title);
+      if (row) return { at: { category: row.name }, target: title };
+      break;
+    }
+  }
+  // The chart has no place for chapters: the note is shown beside it.
+  return { at: {}, target: title };
+}
+
+/** Something named (a character or a word) on a chart that draws named things. */
+function placeNamed(names: string[], data: ChartData): PinnedNote['at'] | null {
+  const has = (x: string | undefined) => x !== undefined && names.includes(x);
+  switch (data.kind) {
+    case 'bars': {
+      const c = data.categories.find((x) => has(x) || has(x.toLowerCase()));
+      return c !== undefined ? { category: c } : null;
+    }
+    case 'lines': {
+      const s = data.series.find((x) => has(x.id) || has(x.name));
+      return s ? { series: s.id } : null;
+    }
+    case 'strip': {
+      const r = data.rows.find((x) => has(x.id) || has(x.name));
+      return r ? { category: r.id } : null;
+    }
+    case 'matrix': {
+      const r = [...data.rows, ...data.columns].find((x) => has(x.id) || has(x.name));
+      return r ? { category: r.name } : null;
+    }
+    case 'network': {
+      const nd = data.nodes.find((x) => has(x.id) || has(x.name));
+      return nd ? { category: nd.id } : null;
+    }
+    case 'scatter': {
+      const pt = data.points.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()));
+      return pt ? { category: pt.id } : null;
+    }
+    case 'treemap': {
+      const it = data.items.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()));
+      return it ? { category: it.id } : null;
+    }
+    case 'multiples': {
+      // A panel drawn for the thing itself, else the first panel that shows it.
+      const own = data.panels.find((p) => has(p.id) || has(p.title));
+      if (own) return { category: own.id };
+      const showing = data.panels.find((p) =>
+        p.data.kind === 'bars' ? p.data.categories.some((c) => has(c) || has(c.toLowerCase())) : p.data.series.some((x) => has(x.id) || has(x.name)),
+      );
+      return showing ? { category: showing.id } : null;
+    }
+    default:
+      return null;
+  }
+}
+
+/** A word in running text or concordance lines: the first line or span that holds it. */
+function placeInText(word: string, data: ChartData): PinnedNote['at'] | null {
+  const holds = (s: string) => new RegExp(`(^|[^\\p{L}])${word.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}($|[^\\p{L}])`, 'iu').test(s);
+  if (data.kind === 'kwic') {
+    const i = data.lines.findIndex((l) => holds(`${l.left} ${l.keyword} ${l.right}`));
+    return i >= 0 ? { x: i } : null;
+  }
+  if (data.kind === 'textmap') {
+    const i = data.spans.findIndex((sp) => holds(sp.text));
+    return i >= 0 ? { x: i } : null;
+  }
+  if (data.kind === 'tree') {
+    const walk = (n: { word: string; children: { word: string; children: unknown[] }[] }): boolean =>
+      n.word.toLowerCase() === word || n.children.some((c) => walk(c as never));
+    return walk(data.root) ? { category: word } : null;
+  }
+  return null;
 }
 
 function atWhere(where: Where, code: string, message: string, hint?: string): Problem {
