@@ -4,7 +4,7 @@ import type { BarsData, StripData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { griesDP, griesDPnorm } from '../stats/dp.ts';
 import { juillandD } from '../stats/juilland.ts';
-import { carrollD2 } from '../stats/carroll.ts';
+import { entropyD2 } from '../stats/entropy-d2.ts';
 import { findSequence } from '../stats/sequence.ts';
 import { hasStopwords, stopwords } from './stopwords.ts';
 import { chapterTick, segmentLabel } from './labels.ts';
@@ -52,9 +52,9 @@ export const dispersionParams = z
         'Most occurrence positions listed per word for the dispersion plot; a word occurring more often lists an evenly spaced sample of its occurrences (every k-th) and is marked `positionsSampled`. Counts and dispersion scores always use every occurrence. Default: 2000.',
       ),
     value: z
-      .enum(['dp', 'dpNorm', 'juillandD', 'carrollD2'])
+      .enum(['dp', 'dpNorm', 'juillandD', 'entropyD2'])
       .default('dp')
-      .describe("What a bar chart shows: Gries' DP, DPnorm, Juilland's D or Carroll's D₂. Default: \"dp\"."),
+      .describe("What a bar chart shows: Gries' DP, DPnorm, Juilland's D or the entropy-based D₂. Default: \"dp\"."),
   })
   .strict();
 
@@ -78,8 +78,8 @@ export interface DispersionWord {
   dpNorm: number | null;
   /** Juilland's D on the word's rate per part (1 = perfectly even). */
   juillandD: number | null;
-  /** Carroll's D₂, the relative entropy of the word's rates per part (1 = perfectly even). */
-  carrollD2: number | null;
+  /** the entropy-based D₂, the relative entropy of the word's rates per part (1 = perfectly even). */
+  entropyD2: number | null;
   /** Token index of each occurrence (first word of a phrase), in text order; a sample when `positionsSampled`. */
   positions: number[];
   positionsSampled: boolean;
@@ -175,7 +175,7 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
         dp: round(griesDP(perPart, sizes), 4),
         dpNorm: round(griesDPnorm(perPart, sizes), 4),
         juillandD: round(juillandD(rates), 4),
-        carrollD2: round(carrollD2(rates), 4),
+        entropyD2: round(entropyD2(rates), 4),
         positions: kept === at ? at.slice() : kept,
         positionsSampled: kept.length < at.length,
       };
@@ -192,12 +192,12 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
   method: {
     what: 'How evenly a word is spread through the text: whether it turns up in every chapter (or stretch of the text) in proportion to its length, or is packed into a few.',
     formula:
-      "Split the text into n parts (chapters, or equal segments of word positions). For part i, sᵢ = its share of the text's words and vᵢ = its share of the word's occurrences. Gries' DP = ½ Σ |vᵢ − sᵢ|: 0 when the word is spread exactly as the parts' lengths predict, close to 1 when it sits in one small part. DPnorm = DP ÷ (1 − min sᵢ), so that 1 is the most uneven spread possible. Juilland's D = 1 − (σ/μ)/√(n − 1), with μ and σ (population standard deviation) taken over the word's rate in each part (occurrences ÷ part length): 1 is perfectly even. Carroll's D₂ = −Σ pᵢ log₂ pᵢ / log₂ n, with pᵢ the part's share of the summed rates: also 1 when perfectly even. A phrase counts where its first word stands; its words must be consecutive and in one sentence.",
+      "Split the text into n parts (chapters, or equal segments of word positions). For part i, sᵢ = its share of the text's words and vᵢ = its share of the word's occurrences. Gries' DP = ½ Σ |vᵢ − sᵢ|: 0 when the word is spread exactly as the parts' lengths predict, close to 1 when it sits in one small part. DPnorm = DP ÷ (1 − min sᵢ), so that 1 is the most uneven spread possible. Juilland's D = 1 − (σ/μ)/√(n − 1), with μ and σ (population standard deviation) taken over the word's rate in each part (occurrences ÷ part length): 1 is perfectly even. the entropy-based D₂ = −Σ pᵢ log₂ pᵢ / log₂ n, with pᵢ the part's share of the summed rates: also 1 when perfectly even. A phrase counts where its first word stands; its words must be consecutive and in one sentence.",
     source:
-      "DP: Gries (2008, \"Dispersions and adjusted frequencies in corpora\", International Journal of Corpus Linguistics 13(4)); DPnorm: Lijffijt & Gries (2012, International Journal of Corpus Linguistics 17(1)). Juilland's D: Juilland & Chang-Rodríguez (1964), in the form given by Carroll (1970), who also proposed D₂ (\"An alternative to Juilland's usage coefficient for lexical frequencies\").",
+      "DP: Gries (2008, \"Dispersions and adjusted frequencies in corpora\", International Journal of Corpus Linguistics 13(4)); DPnorm: Lijffijt & Gries (2012, International Journal of Corpus Linguistics 17(1)). Juilland's D: Juilland & Chang-Rodríguez (1964), in the form given by the 1970 ETS research report \"An alternative to Juilland's usage coefficient for lexical frequencies\", which also proposed the entropy-based D₂.",
     caveats: [
       'Scores depend on the parts chosen: chapters of very different lengths and equal segments can rank the same words differently.',
-      "Juilland's D and Carroll's D₂ need at least two parts, and every score here depends on how the text is divided: compare words over the same parts only.",
+      "Juilland's D and the entropy-based D₂ need at least two parts, and every score here depends on how the text is divided: compare words over the same parts only.",
       'A rare word cannot be evenly spread: with three occurrences in twenty chapters, DP is high whatever the author intended. Compare words of similar frequency.',
       'For the dispersion plot, a word with more occurrences than `maxPositions` shows an evenly spaced sample of them; the scores use them all.',
     ],
@@ -210,14 +210,14 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
         { key: 'dp', label: 'DP', numeric: true },
         { key: 'dpNorm', label: 'DPnorm', numeric: true },
         { key: 'juillandD', label: "Juilland's D", numeric: true },
-        { key: 'carrollD2', label: "Carroll's D₂", numeric: true },
+        { key: 'entropyD2', label: "Entropy D₂", numeric: true },
         ...result.parts.map((p) => ({
           key: `${result.by === 'segment' ? 's' : 'ch'}${p.tick}`,
           label: result.by === 'segment' ? `Seg. ${p.tick}` : `Ch. ${p.tick}`,
           numeric: true,
         })),
       ],
-      rows: result.words.map((w) => [w.word, w.frequency, w.dp, w.dpNorm, w.juillandD, w.carrollD2, ...w.perPart]),
+      rows: result.words.map((w) => [w.word, w.frequency, w.dp, w.dpNorm, w.juillandD, w.entropyD2, ...w.perPart]),
     };
   },
   views: {
@@ -232,7 +232,7 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
       };
     },
     bars(result, params): BarsData {
-      const label = { dp: 'DP', dpNorm: 'DPnorm', juillandD: "Juilland's D", carrollD2: "Carroll's D₂" }[params.value];
+      const label = { dp: 'DP', dpNorm: 'DPnorm', juillandD: "Juilland's D", entropyD2: "Entropy D₂" }[params.value];
       const shown = result.words.filter((w) => w[params.value] !== null);
       return {
         kind: 'bars',

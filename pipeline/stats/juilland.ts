@@ -1,5 +1,5 @@
 /**
- * Juilland's D (Juilland & Chang-Rodríguez 1964), as given by Carroll (1970):
+ * Juilland's D (Juilland & Chang-Rodríguez 1964), as given by the 1970 ETS report "An alternative to Juilland's usage coefficient for lexical frequencies":
  *
  *   D = 1 − V / √(n − 1),   V = σ / μ
  *

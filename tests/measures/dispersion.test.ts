@@ -48,16 +48,16 @@ describe('dispersion', () => {
     expect(w.dpNorm).toBeCloseTo(0.5, 4);
   });
 
-  it("reproduces Carroll 1970's five-part examples through the measure", () => {
-    // Five chapters of ten words; "heron" 0, 4, 3, 2, 1 times → Juilland's D 0.6464 (Carroll 1970, recomputed);
-    // "tern" 2, 1, 1, 1, 0 times → Carroll's D₂ 0.8277 (Carroll 1970, recomputed).
+  it("reproduces the 1970 usage-coefficient report's five-part examples through the measure", () => {
+    // Five chapters of ten words; "heron" 0, 4, 3, 2, 1 times → Juilland's D 0.6464 (the ETS usage-coefficient report, 1970, recomputed);
+    // "tern" 2, 1, 1, 1, 0 times → the entropy-based D₂ 0.8277 (the ETS usage-coefficient report, 1970, recomputed).
     const fill = (heron: number, tern: number) =>
       [...new Array<string>(heron).fill('heron'), ...new Array<string>(tern).fill('tern'), ...new Array<string>(10 - heron - tern).fill('gull')].join(' ');
     const ctx = context(chaptersOf([fill(0, 2), fill(4, 1), fill(3, 1), fill(2, 1), fill(1, 0)]));
     const [heron, tern] = dispersion.compute(ctx, dispersion.params.parse({ words: ['heron', 'tern'] })).words;
     expect(heron!.perPart).toEqual([0, 4, 3, 2, 1]);
     expect(heron!.juillandD).toBeCloseTo(0.6464, 4);
-    expect(tern!.carrollD2).toBeCloseTo(0.8277, 4);
+    expect(tern!.entropyD2).toBeCloseTo(0.8277, 4);
   });
 
   it('measures the most frequent words when none are named, stopwords left out unless asked', () => {

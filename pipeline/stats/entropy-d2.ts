@@ -1,5 +1,5 @@
 /**
- * Carroll's D₂ (Carroll 1970): the entropy of a word's distribution over n
+ * The entropy-based D₂ (the ETS usage-coefficient report, 1970): the entropy of a word's distribution over n
  * parts, relative to the largest entropy possible,
  *
  *   pᵢ = xᵢ / Σ x      D₂ = −Σ pᵢ log₂ pᵢ / log₂ n      (0 · log 0 taken as 0)
@@ -7,7 +7,7 @@
  * 1 means perfectly even, 0 all in one part. As with Juilland's D, pass rates
  * (frequency ÷ part size) when the parts differ in size.
  */
-export function carrollD2(values: ArrayLike<number>): number | null {
+export function entropyD2(values: ArrayLike<number>): number | null {
   const n = values.length;
   if (n < 2) return null;
   let sum = 0;
