@@ -314,7 +314,17 @@ function drawTextmap(ctx: Ctx): { body: string; height: number } {
         continue;
       }
       const look = looks[it.index];
-      const attrs = { x: cx, y: baseline, 'font-size': look.size === base ? undefined : look.size, 'font-weight': look.bold ? 700 : undefined };
+      // Widths are estimated at build time; the reader's font may run wider or narrower. Holding
+      // each word to its estimated length keeps the spaces between words whatever font is used.
+      const glyphs = a.value === null ? w : w - 2 * PAD_X;
+      const attrs = {
+        x: cx,
+        y: baseline,
+        'font-size': look.size === base ? undefined : look.size,
+        'font-weight': look.bold ? 700 : undefined,
+        textLength: glyphs > 0 ? Math.round(glyphs * 100) / 100 : undefined,
+        lengthAdjust: glyphs > 0 ? 'spacingAndGlyphs' : undefined,
+      };
       if (a.value === null) {
         g.push(textEl(a.text, attrs));
         continue;

@@ -1,5 +1,7 @@
 import { test, expect } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
+import { mkdirSync } from 'node:fs';
+import { resolve } from 'node:path';
 
 const BASE = '/exhibit/';
 
@@ -60,18 +62,47 @@ test.describe('the demo exhibit in a browser', () => {
   });
 
   test('the dialogue panels show a speaker bar chart, a conversation matrix and a network', async ({ page }) => {
-    for (const [path, kind] of [
-      ['voices/who-speaks/', 'bars'],
-      ['voices/who-speaks-to-whom/', 'matrix'],
-      ['voices/the-web-of-the-staithe/', 'network'],
+    for (const [path, kind, measure] of [
+      ['voices/who-speaks/', 'bars', 'speech'],
+      ['voices/who-speaks-to-whom/', 'matrix', 'conversation'],
+      ['voices/the-web-of-the-staithe/', 'network', 'network'],
     ] as const) {
       await page.goto(BASE + path);
       const chart = page.locator(`figure.chart svg[data-chart="${kind}"]`).locator('visible=true');
       await expect(chart).toHaveCount(1);
       // Its data table lists the cast members the chart draws.
       await expect(page.locator('table.data tbody tr')).not.toHaveCount(0);
-      await expect(page.locator('.method-card h2')).toContainText(path.includes('network') ? 'network' : path.includes('whom') ? 'conversation' : 'speech');
+      await expect(page.locator('.method-card h2')).toContainText(measure);
     }
+  });
+
+  test('every chart kind is screenshotted at 360 and 1920 px, with no text under 9 px on screen', async ({ browser }) => {
+    test.setTimeout(300_000);
+    const out = resolve(import.meta.dirname, '../../.vitrine/screens');
+    mkdirSync(out, { recursive: true });
+    const seen = new Set<string>();
+    for (const width of [360, 1920]) {
+      const context = await browser.newContext({ viewport: { width, height: 1000 } });
+      const page = await context.newPage();
+      await page.goto(BASE);
+      const panels = await page.locator('.room-list .panel-links a').evaluateAll((as) => as.map((a) => a.getAttribute('href')!));
+      for (const href of panels) {
+        await page.goto(href);
+        await page.evaluate(() => document.fonts.ready);
+        const chart = page.locator('figure.chart svg[role="img"]').locator('visible=true');
+        const kind = (await chart.getAttribute('data-chart'))!;
+        seen.add(kind);
+        await page.locator('figure.chart').screenshot({ path: `${out}/${href.split('/').filter(Boolean).slice(-1)[0]}-${width}.png` });
+        // The smallest text the visitor sees in the chart, in CSS pixels.
+        const smallest = await chart.evaluate((svg) =>
+          Math.min(...[...svg.querySelectorAll('text')].filter((t) => t.getBoundingClientRect().height > 0).map((t) => parseFloat(getComputedStyle(t).fontSize) * (svg.getBoundingClientRect().width / (svg as SVGSVGElement).viewBox.baseVal.width))),
+        );
+        expect(smallest, `${href} at ${width} px`).toBeGreaterThanOrEqual(9);
+      }
+      await context.close();
+    }
+    // Every chart kind is used by the demo exhibit.
+    expect([...seen].sort()).toEqual(['bars', 'kwic', 'lines', 'matrix', 'multiples', 'network', 'scatter', 'strip', 'textmap', 'tree', 'treemap']);
   });
 
   test('a panel is legible at 360 px: no horizontal scrolling of the page', async ({ browser }) => {

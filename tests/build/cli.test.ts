@@ -72,7 +72,12 @@ describe('vitrine check', () => {
 describe('vitrine check: dialogue pins and word lists', () => {
   it('reports a pin that matches no quotation, at the pin in the plan', () => {
     const { plan } = copy();
-    replaceIn(plan, '    edition:', '    dialogue:\n      pins:\n        - { chapter: 2, startsWith: "No such words are spoken", speaker: tamsin }\n    edition:');
+    const text = readFileSync(plan, 'utf8');
+    if (/\n    dialogue:\n      pins:\n/.test(text)) {
+      writeFileSync(plan, text.replace(/\n      pins:\n/, '\n      pins:\n        - { chapter: 2, startsWith: "No such words are spoken", speaker: tamsin }\n'));
+    } else {
+      replaceIn(plan, '    edition:', '    dialogue:\n      pins:\n        - { chapter: 2, startsWith: "No such words are spoken", speaker: tamsin }\n    edition:');
+    }
     const r = vitrine(['check', plan]);
     expect(r.status).toBe(1);
     expect(r.stderr).toMatch(/exhibit\.yaml:\d+:\d+ texts\[0\]\.dialogue\.pins\[0\]: .*No such words are spoken/);
