@@ -7,6 +7,17 @@ import { hasStopwords, stopwords } from './stopwords.ts';
 import { requireEnglish } from '../nlp/english.ts';
 import { tagModel } from '../nlp/tag.ts';
 import { speakerOfTokens } from './frequency.ts';
+import { findPhrases, type PhraseSet } from './repetition/phrases.ts';
+import { familiesOf } from './repetition/families.ts';
+import { placesOf } from './repetition/places.ts';
+import { orderMembers, rankFamilies } from './repetition/ranking.ts';
+
+export { recurringPhrases, findPhrases, phraseSet, phraseList } from './repetition/phrases.ts';
+export type { Phrase, PhraseSet, PhraseOptions } from './repetition/phrases.ts';
+export { phraseFamilies, familiesOf } from './repetition/families.ts';
+export type { Families } from './repetition/families.ts';
+export { familyPlaces, placesOf, placeCounter } from './repetition/places.ts';
+export type { Place } from './repetition/places.ts';
 
 export const repetitionParams = z
   .object({
@@ -238,278 +249,30 @@ function compare(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-/** A maximal recurring phrase: its word types and the token index of each occurrence. */
-export interface Phrase {
-  types: number[];
-  positions: number[];
-}
-
 /**
- * Maximal recurring phrases of `minN`…`maxN` tokens within one sentence,
- * occurring at least `minCount` times and holding a content token.
- *
- * Level by level: every (n+1)-word phrase is a frequent n-word phrase followed
- * by the frequent n-word phrase one position on (they share n−1 words), so
- * each level is one pass over the positions that survived the last. An n-word
- * phrase is dropped when one (n+1)-word phrase that extends it to the right
- * or the left has as many occurrences (it then covers all of them).
+ * The longest run of ≥ 3 words holding a content word that every one of
+ * `members` contains, taken from the words of `members[0]`, or null.
  */
-export function recurringPhrases(model: TextModel, content: Uint8Array, opts: { minN: number; maxN: number; minCount: number }): Phrase[] {
-  const { tokens } = model;
-  const n = tokens.count;
-  const { type, sentence } = tokens;
-  const out: Phrase[] = [];
-  // Level 1: the word types that occur at least minCount times.
-  let groups = model.vocab.length;
-  let counts: Uint32Array = new Uint32Array(groups);
-  for (let i = 0; i < n; i++) counts[type[i]!]!++;
-  let gid: Int32Array = new Int32Array(n);
-  for (let i = 0; i < n; i++) gid[i] = counts[type[i]!]! >= opts.minCount ? type[i]! : -1;
-
-  for (let len = 1; len <= opts.maxN; len++) {
-    // Build level len+1 (when needed) and mark the level-len groups it covers.
-    const covered = new Uint8Array(groups);
-    let next: Int32Array | null = null;
-    let nextCounts = new Uint32Array(0);
-    let nextGroups = 0;
-    if (len < opts.maxN) {
-      const ids = new Map<number, number>();
-      const raw = new Int32Array(n).fill(-1);
-      const rawCounts: number[] = [];
-      const prefix: number[] = [];
-      const suffix: number[] = [];
-      for (let p = 0; p + len < n; p++) {
-        const a = gid[p]!;
-        const b = gid[p + 1]!;
-        if (a < 0 || b < 0 || sentence[p] !== sentence[p + len]) continue;
-        const key = a * groups + b;
-        let id = ids.get(key);
-        if (id === undefined) {
-          id = rawCounts.length;
-          ids.set(key, id);
-          rawCounts.push(0);
-          prefix.push(a);
-          suffix.push(b);
-        }
-        rawCounts[id]!++;
-        raw[p] = id;
+function sharedCore(set: PhraseSet, members: number[], isContent: (type: number) => boolean): number[] | null {
+  const { types, typeStart } = set;
+  const from = typeStart[members[0]!]!;
+  const length = typeStart[members[0]! + 1]! - from;
+  for (let len = length; len >= 3; len--) {
+    for (let s = from; s + len <= from + length; s++) {
+      let content = false;
+      for (let k = s; k < s + len && !content; k++) content = isContent(types[k]!);
+      if (content && members.every((m) => containsRun(types, typeStart[m]!, typeStart[m + 1]!, s, len))) {
+        return Array.from(types.subarray(s, s + len));
       }
-      // Keep the frequent ones, renumbered densely.
-      const dense = new Int32Array(rawCounts.length).fill(-1);
-      for (let id = 0; id < rawCounts.length; id++) {
-        const c = rawCounts[id]!;
-        if (c < opts.minCount) continue;
-        dense[id] = nextGroups++;
-        if (c === counts[prefix[id]!]) covered[prefix[id]!] = 1;
-        if (c === counts[suffix[id]!]) covered[suffix[id]!] = 1;
-      }
-      nextCounts = new Uint32Array(nextGroups);
-      for (let id = 0; id < rawCounts.length; id++) if (dense[id]! >= 0) nextCounts[dense[id]!] = rawCounts[id]!;
-      for (let p = 0; p < n; p++) raw[p] = raw[p]! >= 0 ? dense[raw[p]!]! : -1;
-      next = raw;
-    }
-    if (len >= opts.minN) {
-      // The maximal level-len phrases that hold a content word.
-      const index = new Int32Array(groups).fill(-1);
-      for (let p = 0; p + len <= n; p++) {
-        const g = gid[p]!;
-        if (g < 0 || covered[g]) continue;
-        let k = index[g]!;
-        if (k === -1) {
-          let hasContent = false;
-          for (let j = p; j < p + len && !hasContent; j++) hasContent = content[j] === 1;
-          if (!hasContent) {
-            index[g] = -2;
-            continue;
-          }
-          k = index[g] = out.length;
-          out.push({ types: Array.from(type.subarray(p, p + len)), positions: [] });
-        }
-        if (k >= 0) out[k]!.positions.push(p);
-      }
-    }
-    if (!next) break;
-    gid = next;
-    counts = nextCounts;
-    groups = nextGroups;
-    if (groups === 0) break;
-  }
-  return out;
-}
-
-/**
- * The places where a family's members occur, in text order, as [first token,
- * end token (exclusive), member]: occurrences that overlap ("mark my words"
- * inside "mark my words, girl"; two overlapping pieces of a repeat longer than
- * maxN) are one place, spanning them all; its member is the longest one that
- * starts there.
- */
-export function familyPlaces(phrases: Phrase[], members: number[]): [number, number, number][] {
-  const all = members
-    .flatMap((m) => phrases[m]!.positions.map((p) => [p, m] as [number, number]))
-    .sort((a, b) => a[0] - b[0] || phrases[b[1]]!.types.length - phrases[a[1]]!.types.length);
-  const places: [number, number, number][] = [];
-  for (const [p, m] of all) {
-    const end = p + phrases[m]!.types.length;
-    const last = places[places.length - 1];
-    if (last && p < last[1]) last[1] = Math.max(last[1], end);
-    else places.push([p, end, m]);
-  }
-  return places;
-}
-
-/** Union-find over phrase indices. */
-function disjointSets(size: number): { find: (x: number) => number; union: (a: number, b: number) => void } {
-  const parent = new Int32Array(size);
-  for (let i = 0; i < size; i++) parent[i] = i;
-  const find = (x: number): number => {
-    while (parent[x] !== x) {
-      parent[x] = parent[parent[x]!]!;
-      x = parent[x]!;
-    }
-    return x;
-  };
-  return {
-    find,
-    union(a, b) {
-      const ra = find(a);
-      const rb = find(b);
-      if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-    },
-  };
-}
-
-/**
- * Families of near-variant phrases, in two steps that do not chain (a family
- * found by linking every pair of related phrases would, in a long text, swallow
- * thousands of phrases through one shared word after another):
- * 1. Core: each phrase takes, of its 3-word runs holding a content word, the
- *    one the most phrases contain (ties: the earlier run in the phrase); the
- *    phrases that take the same run are one family and all contain that run.
- * 2. Variants: a phrase of 4 or more words left alone in step 1 joins the
- *    largest family holding a phrase at token edit distance 1 from it (one
- *    word substituted, inserted or deleted; both of 4 or more words; the
- *    shared words holding a content word). Phrases still alone are grouped
- *    with their lone variants.
- * Returns the family of each phrase (the index of one of its members), and
- * which phrases joined a family in step 2.
- */
-export function phraseFamilies(phrases: Phrase[], isContent: (type: number) => boolean): { family: Int32Array; joined: Uint8Array } {
-  const n = phrases.length;
-
-  // 1. Cores.
-  const support = new Map<string, number>();
-  const runsOf = phrases.map(({ types: ts }) => {
-    const runs: string[] = [];
-    for (let s = 0; s + 3 <= ts.length; s++) {
-      if (!isContent(ts[s]!) && !isContent(ts[s + 1]!) && !isContent(ts[s + 2]!)) continue;
-      const key = `${ts[s]} ${ts[s + 1]} ${ts[s + 2]}`;
-      if (!runs.includes(key)) runs.push(key);
-    }
-    for (const key of runs) support.set(key, (support.get(key) ?? 0) + 1);
-    return runs;
-  });
-  const family = new Int32Array(n);
-  const byCore = new Map<string, number>();
-  for (let i = 0; i < n; i++) {
-    let best: string | null = null;
-    for (const key of runsOf[i]!) if (best === null || support.get(key)! > support.get(best)!) best = key;
-    if (best === null) {
-      family[i] = i;
-      continue;
-    }
-    let f = byCore.get(best);
-    if (f === undefined) byCore.set(best, (f = i));
-    family[i] = f;
-  }
-  const size = new Uint32Array(n);
-  for (let i = 0; i < n; i++) size[family[i]!]!++;
-
-  // 2. Variants at edit distance 1, for phrases of 4 words or more. Keys: the
-  // phrase with one word starred (substitution), the phrase less one word (deletion).
-  const whole = new Map<string, number>();
-  const starred: string[][] = [];
-  const less: string[][] = [];
-  const byStarred = new Map<string, number[]>();
-  const byLess = new Map<string, number[]>();
-  const push = (map: Map<string, number[]>, key: string, i: number): void => {
-    const list = map.get(key);
-    if (list) list.push(i);
-    else map.set(key, [i]);
-  };
-  phrases.forEach(({ types: ts }, i) => {
-    starred[i] = [];
-    less[i] = [];
-    if (ts.length < 4) return;
-    whole.set(ts.join(' '), i);
-    const contentWords = ts.reduce((c, t) => c + (isContent(t) ? 1 : 0), 0);
-    for (let s = 0; s < ts.length; s++) {
-      // The shared words must hold a content word.
-      if (contentWords - (isContent(ts[s]!) ? 1 : 0) === 0) continue;
-      const before = ts.slice(0, s).join(' ');
-      const after = ts.slice(s + 1).join(' ');
-      const star = `${before}|${after}`;
-      starred[i]!.push(star);
-      push(byStarred, star, i);
-      if (ts.length >= 5) {
-        const rest = before && after ? `${before} ${after}` : before || after;
-        less[i]!.push(rest);
-        push(byLess, rest, i);
-      }
-    }
-  });
-  const variants = (i: number): number[] => {
-    const out = new Set<number>();
-    for (const key of starred[i]!) for (const j of byStarred.get(key)!) out.add(j);
-    for (const key of less[i]!) {
-      const shorter = whole.get(key);
-      if (shorter !== undefined) out.add(shorter);
-    }
-    for (const j of byLess.get(phrases[i]!.types.join(' ')) ?? []) out.add(j);
-    out.delete(i);
-    return [...out].sort((a, b) => a - b);
-  };
-  const joined = new Uint8Array(n);
-  const alone: number[] = [];
-  const lonely = new Uint8Array(n);
-  for (let i = 0; i < n; i++) {
-    if (size[family[i]!] !== 1 || phrases[i]!.types.length < 4) continue;
-    let target = -1;
-    for (const j of variants(i)) {
-      const f = family[j]!;
-      if (size[f]! < 2) continue;
-      if (target < 0 || size[f]! > size[target]! || (size[f] === size[target] && f < target)) target = f;
-    }
-    if (target >= 0) {
-      family[i] = target;
-      joined[i] = 1;
-    } else {
-      alone.push(i);
-      lonely[i] = 1;
-    }
-  }
-  const sets = disjointSets(n);
-  for (const i of alone) for (const j of variants(i)) if (lonely[j]) sets.union(i, j);
-  for (const i of alone) family[i] = sets.find(i);
-  return { family, joined };
-}
-
-/** The longest run of ≥ 3 words holding a content word that every member contains, or null. */
-function sharedCore(members: number[][], isContent: (type: number) => boolean): number[] | null {
-  const first = members[0]!;
-  for (let len = first.length; len >= 3; len--) {
-    for (let s = 0; s + len <= first.length; s++) {
-      const run = first.slice(s, s + len);
-      if (!run.some(isContent)) continue;
-      if (members.every((m) => containsRun(m, run))) return run;
     }
   }
   return null;
 }
 
-function containsRun(haystack: number[], run: number[]): boolean {
-  outer: for (let s = 0; s + run.length <= haystack.length; s++) {
-    for (let k = 0; k < run.length; k++) if (haystack[s + k] !== run[k]) continue outer;
+/** Whether `types[from…to)` holds the run `types[run…run+len)`. */
+function containsRun(types: Int32Array, from: number, to: number, run: number, len: number): boolean {
+  outer: for (let s = from; s + len <= to; s++) {
+    for (let k = 0; k < len; k++) if (types[s + k] !== types[run + k]) continue outer;
     return true;
   }
   return false;
@@ -534,6 +297,9 @@ function oneLine(s: string): string {
   return s.replace(/\s+/g, ' ').trim();
 }
 
+/** How many members of a family the result lists. */
+const SHOWN_MEMBERS = 10;
+
 export function computeRepetition(ctx: MeasureContext, params: RepetitionParams): RepetitionResult {
   const { model, language } = ctx;
   const { tokens, vocab, chapters, text } = model;
@@ -541,48 +307,39 @@ export function computeRepetition(ctx: MeasureContext, params: RepetitionParams)
   const contentType = new Uint8Array(vocab.length);
   for (let t = 0; t < vocab.length; t++) contentType[t] = stop.has(vocab[t]!) ? 0 : 1;
   const content = new Uint8Array(tokens.count);
-  for (let i = 0; i < tokens.count; i++) content[i] = contentType[tokens.type[i]!]! && !(tokens.flags[i]! & TOKEN_FLAGS.numeric) ? 1 : 0;
   const numericType = new Uint8Array(vocab.length);
-  for (let i = 0; i < tokens.count; i++) if (tokens.flags[i]! & TOKEN_FLAGS.numeric) numericType[tokens.type[i]!] = 1;
+  for (let i = 0; i < tokens.count; i++) {
+    const t = tokens.type[i]!;
+    if (tokens.flags[i]! & TOKEN_FLAGS.numeric) numericType[t] = 1;
+    else content[i] = contentType[t]!;
+  }
   const isContent = (t: number): boolean => contentType[t] === 1 && numericType[t] === 0;
 
-  const phrases = recurringPhrases(model, content, params);
-  const { family: familyOf, joined } = phraseFamilies(phrases, isContent);
-  const byFamily = new Map<number, number[]>();
-  phrases.forEach((_, i) => {
-    const f = familyOf[i]!;
-    const list = byFamily.get(f);
-    if (list) list.push(i);
-    else byFamily.set(f, [i]);
-  });
-  const words = (ts: number[]): string => ts.map((t) => vocab[t]!).join(' ');
-  const labels = phrases.map((ph) => words(ph.types));
-  const ranked = [...byFamily.values()].map((members) => {
-    members.sort((a, b) => phrases[b]!.positions.length - phrases[a]!.positions.length || compare(labels[a]!, labels[b]!));
-    const places = familyPlaces(phrases, members);
-    return { members, places, count: places.length, label: labels[members[0]!]! };
-  });
-  ranked.sort((a, b) => b.count - a.count || compare(a.label, b.label));
+  const set = findPhrases(model, content, params);
+  const { family: familyOf, joined } = familiesOf(set, isContent);
+  const lengthOf = (i: number): number => set.typeStart[i + 1]! - set.typeStart[i]!;
+  const words = (ts: ArrayLike<number>): string => Array.from(ts, (t) => vocab[t]!).join(' ');
+  // Labels are written out only when a tie in counts needs them.
+  const labels: (string | undefined)[] = new Array(set.count);
+  const label = (i: number): string => (labels[i] ??= words(set.types.subarray(set.typeStart[i]!, set.typeStart[i + 1]!)));
+  const occurrencesOf = (i: number): number => set.positionStart[i + 1]! - set.positionStart[i]!;
+  const { ranked, familyCount } = rankFamilies(set, familyOf, label, params.top);
 
   const paras = paragraphTokens(model);
   const who = ctx.cast.length ? speakerOfTokens(ctx) : null;
-  const families: Family[] = ranked.slice(0, params.top).map((f, r) => {
+  const families: Family[] = ranked.map((f, r) => {
     // The core is shared by the members grouped by it (variants that joined later may lack it).
-    const grouped = f.members.filter((m) => !joined[m]);
-    const core = sharedCore(
-      (grouped.length ? grouped : f.members).map((m) => phrases[m]!.types),
-      isContent,
-    );
-    const places = f.places.slice(0, params.occurrences);
+    const members = orderMembers(set, f.members, label, SHOWN_MEMBERS, (m) => !joined[m]);
+    const grouped = members.filter((m) => !joined[m]);
+    const core = sharedCore(set, grouped.length ? grouped : members, isContent);
+    const places = placesOf(set, members).slice(0, params.occurrences);
     return {
       rank: r + 1,
-      label: f.label,
+      label: label(f.head),
       core: core ? words(core) : null,
       count: f.count,
-      memberCount: f.members.length,
-      members: f.members
-        .slice(0, 10)
-        .map((m) => ({ phrase: words(phrases[m]!.types), words: phrases[m]!.types.length, count: phrases[m]!.positions.length })),
+      memberCount: members.length,
+      members: members.slice(0, SHOWN_MEMBERS).map((m) => ({ phrase: label(m), words: lengthOf(m), count: occurrencesOf(m) })),
       occurrences: places.map(([p, end, m]) => {
         const last = end - 1;
         const para = tokens.paragraph[p]!;
@@ -590,7 +347,7 @@ export function computeRepetition(ctx: MeasureContext, params: RepetitionParams)
         const from = Math.max(paras.first[para]!, p - params.context);
         const to = Math.min(paras.end[para]! - 1, last + params.context);
         return {
-          phrase: words(phrases[m]!.types),
+          phrase: label(m),
           words: end - p,
           chapter: chapter.index + 1,
           paragraph: para - chapter.firstParagraph + 1,
@@ -610,8 +367,8 @@ export function computeRepetition(ctx: MeasureContext, params: RepetitionParams)
     minN: params.minN,
     maxN: params.maxN,
     minCount: params.minCount,
-    phrases: phrases.length,
-    familyCount: ranked.length,
+    phrases: set.count,
+    familyCount,
     stopwordList: hasStopwords(language) ? `stopwords-iso (${language})` : null,
     speakers: who !== null,
     families,
