@@ -278,6 +278,26 @@ function containsRun(types: Int32Array, from: number, to: number, run: number, l
   return false;
 }
 
+/** 1 for each word type not in the stopword list. */
+function notStopwords(vocab: readonly string[], stop: Set<string>): Uint8Array {
+  const out = new Uint8Array(vocab.length);
+  for (let t = 0; t < vocab.length; t++) out[t] = stop.has(vocab[t]!) ? 0 : 1;
+  return out;
+}
+
+/** Content tokens (a word type not a stopword, not a numeral), and the word types seen as numerals. */
+function contentTokens(model: TextModel, contentType: Uint8Array): { content: Uint8Array; numericType: Uint8Array } {
+  const { tokens } = model;
+  const content = new Uint8Array(tokens.count);
+  const numericType = new Uint8Array(model.vocab.length);
+  for (let i = 0; i < tokens.count; i++) {
+    const t = tokens.type[i]!;
+    if (tokens.flags[i]! & TOKEN_FLAGS.numeric) numericType[t] = 1;
+    else content[i] = contentType[t]!;
+  }
+  return { content, numericType };
+}
+
 /** First token of each paragraph and one past its last. */
 function paragraphTokens(model: TextModel): { first: Uint32Array; end: Uint32Array } {
   const { tokens, paragraphs } = model;
@@ -303,16 +323,8 @@ const SHOWN_MEMBERS = 10;
 export function computeRepetition(ctx: MeasureContext, params: RepetitionParams): RepetitionResult {
   const { model, language } = ctx;
   const { tokens, vocab, chapters, text } = model;
-  const stop = stopwords(language);
-  const contentType = new Uint8Array(vocab.length);
-  for (let t = 0; t < vocab.length; t++) contentType[t] = stop.has(vocab[t]!) ? 0 : 1;
-  const content = new Uint8Array(tokens.count);
-  const numericType = new Uint8Array(vocab.length);
-  for (let i = 0; i < tokens.count; i++) {
-    const t = tokens.type[i]!;
-    if (tokens.flags[i]! & TOKEN_FLAGS.numeric) numericType[t] = 1;
-    else content[i] = contentType[t]!;
-  }
+  const contentType = notStopwords(vocab, stopwords(language));
+  const { content, numericType } = contentTokens(model, contentType);
   const isContent = (t: number): boolean => contentType[t] === 1 && numericType[t] === 0;
 
   const set = findPhrases(model, content, params);
@@ -320,8 +332,12 @@ export function computeRepetition(ctx: MeasureContext, params: RepetitionParams)
   const lengthOf = (i: number): number => set.typeStart[i + 1]! - set.typeStart[i]!;
   const words = (ts: ArrayLike<number>): string => Array.from(ts, (t) => vocab[t]!).join(' ');
   // Labels are written out only when a tie in counts needs them.
-  const labels: (string | undefined)[] = new Array(set.count);
-  const label = (i: number): string => (labels[i] ??= words(set.types.subarray(set.typeStart[i]!, set.typeStart[i + 1]!)));
+  const labels = new Map<number, string>();
+  const label = (i: number): string => {
+    let s = labels.get(i);
+    if (s === undefined) labels.set(i, (s = words(set.types.subarray(set.typeStart[i]!, set.typeStart[i + 1]!))));
+    return s;
+  };
   const occurrencesOf = (i: number): number => set.positionStart[i + 1]! - set.positionStart[i]!;
   const { ranked, familyCount } = rankFamilies(set, familyOf, label, params.top);
 
@@ -332,7 +348,7 @@ export function computeRepetition(ctx: MeasureContext, params: RepetitionParams)
     const members = orderMembers(set, f.members, label, SHOWN_MEMBERS, (m) => !joined[m]);
     const grouped = members.filter((m) => !joined[m]);
     const core = sharedCore(set, grouped.length ? grouped : members, isContent);
-    const places = placesOf(set, members).slice(0, params.occurrences);
+    const places = placesOf(set, members, params.occurrences);
     return {
       rank: r + 1,
       label: label(f.head),

@@ -44,15 +44,29 @@ export function pairList(capacity = 1024): { push: (key: number, item: number) =
       items.push(item);
     },
     rows(count) {
-      const k = keys.toArray();
-      const it = items.toArray();
-      const start = new Int32Array(count + 1);
-      for (let i = 0; i < k.length; i++) start[k[i]! + 1]!++;
-      for (let r = 0; r < count; r++) start[r + 1]! += start[r]!;
-      const fill = start.slice(0, count);
-      const out = new Int32Array(k.length);
-      for (let i = 0; i < k.length; i++) out[fill[k[i]!]!++] = it[i]!;
-      return { start, items: out };
+      return rowsOf(keys.view(), items.view(), count);
     },
   };
+}
+
+/** Pairs (keys[k], items[k]) as rows over keys 0…count−1, each row in the order given (a counting sort). */
+export function rowsOf(keys: Int32Array, items: Int32Array, count: number): Rows {
+  const start = rowStarts(keys, count);
+  const fill = start.slice(0, count);
+  const out = new Int32Array(keys.length);
+  for (let i = 0; i < keys.length; i++) out[fill[keys[i]!]!++] = items[i]!;
+  return { start, items: out };
+}
+
+/** Where each key's row starts, for rows over keys 0…count−1 (one past the last at `count`). */
+function rowStarts(keys: Int32Array, count: number): Int32Array {
+  const start = new Int32Array(count + 1);
+  for (let i = 0; i < keys.length; i++) start[keys[i]! + 1]!++;
+  return runningTotals(start);
+}
+
+/** Each item made the sum of itself and all before it (in place). */
+export function runningTotals(values: Int32Array): Int32Array {
+  for (let i = 1; i < values.length; i++) values[i]! += values[i - 1]!;
+  return values;
 }

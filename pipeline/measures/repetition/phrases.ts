@@ -88,23 +88,14 @@ export function findPhrases(model: TextModel, content: Uint8Array, opts: PhraseO
   const gid = new Int32Array(n);
   const alive = new Int32Array(n);
   let counts: Int32Array = new Int32Array(model.vocab.length);
-  let aliveCount = 0;
   let groups = model.vocab.length;
-  // Level 1: the word types that occur at least minCount times.
-  for (let i = 0; i < n; i++) counts[type[i]!]!++;
-  for (let i = 0; i < n; i++) {
-    const t = type[i]!;
-    if (counts[t]! >= minCount) {
-      gid[i] = t;
-      alive[aliveCount++] = i;
-    } else gid[i] = -1;
-  }
+  let aliveCount = firstLevel(type, n, minCount, counts, gid, alive);
   // Each alive position's pair id at the level being built; the first
   // position of each group (`firstAt`, from level 2 on; pair ids are given in
   // order of first position, so group ids run in text order).
   const pairOf = new Int32Array(aliveCount);
-  let firstAt: Int32Array = new Int32Array(Math.max(16, aliveCount >>> 2));
-  const table = pairTable(aliveCount >>> 2);
+  let firstAt: Int32Array = new Int32Array(aliveCount);
+  const table = pairTable(aliveCount);
   let ratio = 0.25; // distinct pairs per position, as last seen
   let runs: PhraseSet['runs'] = null;
   // Scratch reused from level to level (fresh memory is slow to touch).
@@ -120,45 +111,134 @@ export function findPhrases(model: TextModel, content: Uint8Array, opts: PhraseO
     if (building) {
       // Pair (group at p, group at p + 1) of each position whose len + 1 words share a sentence.
       resetTable(table, Math.ceil(aliveCount * ratio));
-      pairs = countPairs(table, gid, alive, aliveCount, sentence, len, pairOf);
+      pairs = table.size = countPairs(table, gid, alive, aliveCount, sentence, len, pairOf);
       ratio = pairs / Math.max(1, aliveCount);
       // The frequent pairs; a group is covered when one of them holds all its occurrences.
-      if (nextCounts.length < pairs || nextCounts === counts) nextCounts = new Int32Array(Math.max(pairs, nextCounts.length));
+      if (nextCounts.length < pairs) nextCounts = new Int32Array(pairs);
       pairCounts(table, minCount, counts, covered, nextCounts);
     }
-    // This level's phrases (level 1 never has any: minN is 2 or more).
-    const phrases = len >= opts.minN ? choosePhrases(out, len, groups, counts, minCount, covered, firstAt, content, type, slot) : null;
-    // One pass: the positions of this level's phrases; the next level, in place
-    // (the positions of frequent pairs, numbered by pair id).
-    let next = 0;
-    for (let k = 0; k < aliveCount; k++) {
-      const p = alive[k]!;
-      if (phrases) {
-        const s = slot[gid[p]!]!;
-        if (s >= 0) phrases.positions[phrases.cursor[s]!++] = p;
-      }
-      if (building) {
-        const id = pairOf[k]!;
-        if (id >= 0 && nextCounts[id]! >= minCount) {
-          gid[p] = id;
-          alive[next++] = p;
-        } else gid[p] = -1;
-      }
-    }
+    // This level's phrases (level 1 never has any: minN is 2 or more). At the
+    // first such level, room for about as many positions (and words) as it
+    // has, so that the columns seldom grow (untouched room costs nothing).
+    if (len === opts.minN) reserve(out, aliveCount >>> 2, aliveCount, aliveCount);
+    const cursor = len >= opts.minN ? choosePhrases(out, len, groups, counts, minCount, covered, firstAt, content, type, slot) : null;
+    const next = advance(gid, alive, aliveCount, building ? pairOf : null, nextCounts, minCount, cursor, out.positions, slot);
     if (!building || next === 0) break;
     aliveCount = next;
     [counts, nextCounts] = [nextCounts, counts];
     groups = pairs;
     [firstAt, table.first] = [table.first, firstAt];
   }
-  return out.finish(runs);
+  return finish(out, runs);
+}
+
+/*
+ * Each hot loop below has a function of its own: the engine compiles a
+ * function while its first loop runs, and a later loop in the same function
+ * would then run with no type feedback and fall back to the interpreter.
+ */
+
+/** Level 1 over the first `n` tokens: the word types that occur at least `minCount` times (`counts` gets each type's count); returns how many tokens are alive. */
+function firstLevel(type: Uint32Array, n: number, minCount: number, counts: Int32Array, gid: Int32Array, alive: Int32Array): number {
+  countTypes(type, n, counts);
+  return keepFrequent(type, n, minCount, counts, gid, alive);
+}
+
+function countTypes(type: Uint32Array, n: number, counts: Int32Array): void {
+  for (let i = 0; i < n; i++) counts[type[i]!]!++;
+}
+
+function keepFrequent(type: Uint32Array, n: number, minCount: number, counts: Int32Array, gid: Int32Array, alive: Int32Array): number {
+  let aliveCount = 0;
+  for (let i = 0; i < n; i++) {
+    const t = type[i]!;
+    if (counts[t]! >= minCount) {
+      gid[i] = t;
+      alive[aliveCount++] = i;
+    } else gid[i] = -1;
+  }
+  return aliveCount;
+}
+
+/**
+ * One pass over a level's positions: puts down the positions of the level's
+ * phrases (`slot` of each group and `cursor` of each slot, see
+ * `choosePhrases`) in `positions`, when `cursor` is given; and, when `pairOf`
+ * is given, moves to the next level in place (the positions of pairs counted
+ * at least `minCount` times, numbered by pair id). Returns how many positions
+ * the next level has. (Three loops, one for each case, so that each is
+ * compiled with all it needs.)
+ */
+function advance(
+  gid: Int32Array,
+  alive: Int32Array,
+  aliveCount: number,
+  pairOf: Int32Array | null,
+  pairCounts: Int32Array,
+  minCount: number,
+  cursor: Int32Array | null,
+  positions: Int32Array,
+  slot: Int32Array,
+): number {
+  if (!cursor) return pairOf ? nextLevel(gid, alive, aliveCount, pairOf, pairCounts, minCount) : 0;
+  if (!pairOf) {
+    placePhrases(gid, alive, aliveCount, cursor, positions, slot);
+    return 0;
+  }
+  return placeAndAdvance(gid, alive, aliveCount, pairOf, pairCounts, minCount, cursor, positions, slot);
+}
+
+function nextLevel(gid: Int32Array, alive: Int32Array, aliveCount: number, pairOf: Int32Array, pairCounts: Int32Array, minCount: number): number {
+  let next = 0;
+  for (let k = 0; k < aliveCount; k++) {
+    const p = alive[k]!;
+    const id = pairOf[k]!;
+    if (id >= 0 && pairCounts[id]! >= minCount) {
+      gid[p] = id;
+      alive[next++] = p;
+    } else gid[p] = -1;
+  }
+  return next;
+}
+
+function placePhrases(gid: Int32Array, alive: Int32Array, aliveCount: number, cursor: Int32Array, positions: Int32Array, slot: Int32Array): void {
+  for (let k = 0; k < aliveCount; k++) {
+    const p = alive[k]!;
+    const s = slot[gid[p]!]!;
+    if (s >= 0) positions[cursor[s]!++] = p;
+  }
+}
+
+function placeAndAdvance(
+  gid: Int32Array,
+  alive: Int32Array,
+  aliveCount: number,
+  pairOf: Int32Array,
+  pairCounts: Int32Array,
+  minCount: number,
+  cursor: Int32Array,
+  positions: Int32Array,
+  slot: Int32Array,
+): number {
+  let next = 0;
+  for (let k = 0; k < aliveCount; k++) {
+    const p = alive[k]!;
+    const s = slot[gid[p]!]!;
+    if (s >= 0) positions[cursor[s]!++] = p;
+    const id = pairOf[k]!;
+    if (id >= 0 && pairCounts[id]! >= minCount) {
+      gid[p] = id;
+      alive[next++] = p;
+    } else gid[p] = -1;
+  }
+  return next;
 }
 
 /**
  * Adds to `out` the level's maximal phrases (groups not covered) that hold a
  * content token, in order of first position (the order of group ids), and
- * returns where their positions go: each slot's next place in `positions`;
- * `slot` gets the slot of each group (−1 for none).
+ * returns where their positions go: each slot's next place in
+ * `out.positions`; `slot` gets the slot of each group (−1 for none).
  */
 function choosePhrases(
   out: SetBuilder,
@@ -171,67 +251,111 @@ function choosePhrases(
   content: Uint8Array,
   type: Uint32Array,
   slot: Int32Array,
-): { cursor: Int32Array; positions: Int32Array } {
-  slot.fill(-1, 0, groups);
-  const cursor = intList();
-  let next = out.positionCount();
+): Int32Array {
+  const kept = keptGroups(groups, slot, markPhrases(len, groups, counts, minCount, covered, firstAt, content, slot));
+  reserve(out, kept.length, kept.length * len, sumOf(counts, kept));
+  return addPhrases(out, len, kept, counts, firstAt, type);
+}
+
+/** The sum of `values` at `indices`. */
+function sumOf(values: Int32Array, indices: Int32Array): number {
+  let sum = 0;
+  for (let k = 0; k < indices.length; k++) sum += values[indices[k]!]!;
+  return sum;
+}
+
+/** How many groups are kept as phrases; `slot` gets each group's place among them (−1 for none). */
+function markPhrases(
+  len: number,
+  groups: number,
+  counts: Int32Array,
+  minCount: number,
+  covered: Uint8Array,
+  firstAt: Int32Array,
+  content: Uint8Array,
+  slot: Int32Array,
+): number {
+  let kept = 0;
   for (let g = 0; g < groups; g++) {
+    slot[g] = -1;
     // Pairs counted fewer than minCount times are not groups.
     if (counts[g]! < minCount || covered[g]) continue;
     const p = firstAt[g]!;
     let keep = false;
     for (let j = p; j < p + len && !keep; j++) keep = content[j] === 1;
-    if (!keep) continue;
-    slot[g] = cursor.length;
-    cursor.push(next);
-    next += counts[g]!;
-    out.addPhrase(type, p, len, counts[g]!);
+    if (keep) slot[g] = kept++;
   }
-  return { cursor: cursor.toArray(), positions: out.reservePositions(next) };
+  return kept;
 }
 
+/** The `kept` groups with a slot, in slot order. */
+function keptGroups(groups: number, slot: Int32Array, kept: number): Int32Array {
+  const out = new Int32Array(kept);
+  for (let g = 0; g < groups; g++) if (slot[g]! >= 0) out[slot[g]!] = g;
+  return out;
+}
+
+/** Appends the kept groups as phrases; returns each one's first place in `out.positions`. */
+function addPhrases(out: SetBuilder, len: number, kept: Int32Array, counts: Int32Array, firstAt: Int32Array, type: Uint32Array): Int32Array {
+  const cursor = new Int32Array(kept.length);
+  for (let k = 0; k < kept.length; k++) {
+    const g = kept[k]!;
+    const p = firstAt[g]!;
+    for (let j = p; j < p + len; j++) out.types[out.typeCount++] = type[j]!;
+    cursor[k] = out.positionCount;
+    out.positionCount += counts[g]!;
+    out.count++;
+    out.typeStart[out.count] = out.typeCount;
+    out.positionStart[out.count] = out.positionCount;
+  }
+  return cursor;
+}
+
+/** Phrases as they are found: columns with room to grow (see `PhraseSet`). */
 interface SetBuilder {
-  addPhrase(type: Uint32Array, first: number, len: number, occurrences: number): void;
-  positionCount(): number;
-  /** Grows the positions column to `size` and returns it (to be filled in place). */
-  reservePositions(size: number): Int32Array;
-  finish(runs: PhraseSet['runs']): PhraseSet;
+  count: number;
+  typeStart: Int32Array;
+  types: Int32Array;
+  typeCount: number;
+  positionStart: Int32Array;
+  positions: Int32Array;
+  positionCount: number;
 }
 
 function setBuilder(): SetBuilder {
-  const types = intList(1 << 16);
-  const typeStart = intList(1 << 14);
-  const positionStart = intList(1 << 14);
-  typeStart.push(0);
-  positionStart.push(0);
-  let positions = new Int32Array(1 << 16);
-  let positionCount = 0;
   return {
-    addPhrase(type, first, len, occurrences) {
-      for (let j = first; j < first + len; j++) types.push(type[j]!);
-      typeStart.push(types.length);
-      positionCount += occurrences;
-      positionStart.push(positionCount);
-    },
-    positionCount: () => positionCount,
-    reservePositions(size) {
-      if (size > positions.length) {
-        const bigger = new Int32Array(Math.max(size, positions.length * 2));
-        bigger.set(positions);
-        positions = bigger;
-      }
-      return positions;
-    },
-    finish(runs) {
-      return {
-        runs,
-        count: positionStart.length - 1,
-        typeStart: typeStart.view(),
-        types: types.view(),
-        positionStart: positionStart.view(),
-        positions: positions.subarray(0, positionCount),
-      };
-    },
+    count: 0,
+    typeStart: new Int32Array(1 << 14),
+    types: new Int32Array(1 << 16),
+    typeCount: 0,
+    positionStart: new Int32Array(1 << 14),
+    positions: new Int32Array(1 << 16),
+    positionCount: 0,
+  };
+}
+
+/** Room for `phrases` more phrases of `words` words in all, at `occurrences` more positions. */
+function reserve(out: SetBuilder, phrases: number, words: number, occurrences: number): void {
+  const room = (column: Int32Array, size: number): Int32Array => {
+    if (size <= column.length) return column;
+    const bigger = new Int32Array(Math.max(size, column.length * 2));
+    bigger.set(column);
+    return bigger;
+  };
+  out.typeStart = room(out.typeStart, out.count + phrases + 1);
+  out.positionStart = room(out.positionStart, out.count + phrases + 1);
+  out.types = room(out.types, out.typeCount + words);
+  out.positions = room(out.positions, out.positionCount + occurrences);
+}
+
+function finish(out: SetBuilder, runs: PhraseSet['runs']): PhraseSet {
+  return {
+    count: out.count,
+    typeStart: out.typeStart.subarray(0, out.count + 1),
+    types: out.types.subarray(0, out.typeCount),
+    positionStart: out.positionStart.subarray(0, out.count + 1),
+    positions: out.positions.subarray(0, out.positionCount),
+    runs,
   };
 }
 
@@ -247,12 +371,12 @@ interface PairTable {
   /** The table has 2^bits slots. */
   bits: number;
   size: number;
-  /** The first position of each pair, by id. */
+  /** The first position of each pair, by id (room for as many pairs as positions). */
   first: Int32Array;
 }
 
-function pairTable(expected: number): PairTable {
-  return { slots: new Int32Array(0), bits: 0, size: 0, first: new Int32Array(Math.max(16, expected)) };
+function pairTable(positions: number): PairTable {
+  return { slots: new Int32Array(0), bits: 0, size: 0, first: new Int32Array(positions) };
 }
 
 /** Empties the table, sized for about `expected` pairs. */
@@ -273,8 +397,9 @@ function hashPair(a: number, b: number): number {
  * Counts the pair (group at p, group at p + 1) of each alive position whose
  * len + 1 words share a sentence, into `table`; gives each position its pair
  * id (`pairOf[k]`, −1 for none) and each new pair its first position
- * (`table.first[id]`). Returns the number of distinct pairs. One loop with the
- * probing written out, as it runs over most of the text.
+ * (`table.first[id]`). Returns the number of distinct pairs (for
+ * `table.size`). One loop with the probing written out, as it runs over most
+ * of the text.
  */
 function countPairs(
   table: PairTable,
@@ -286,6 +411,7 @@ function countPairs(
   pairOf: Int32Array,
 ): number {
   const n = gid.length;
+  const first = table.first;
   let slots = table.slots;
   let bits = table.bits;
   let mask = (1 << bits) - 1;
@@ -312,12 +438,7 @@ function countPairs(
         slots[s + 1] = b;
         slots[s + 2] = size;
         slots[s + 3] = 1;
-        if (size === table.first.length) {
-          const bigger = new Int32Array(Math.max(1024, size * 2));
-          bigger.set(table.first);
-          table.first = bigger;
-        }
-        table.first[size] = p;
+        first[size] = p;
         pairOf[k] = size++;
         if (size * 2 > 1 << bits) {
           table.size = size;
@@ -331,7 +452,6 @@ function countPairs(
       at = (at + 1) & mask;
     }
   }
-  table.size = size;
   return size;
 }
 

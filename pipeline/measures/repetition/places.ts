@@ -12,34 +12,56 @@ function lengthOf(set: PhraseSet, m: number): number {
  * The places where a family's members occur, in text order: occurrences that
  * overlap ("mark my words" inside "mark my words, girl"; two overlapping
  * pieces of a repeat longer than maxN) are one place, spanning them all; its
- * member is the longest one that starts there.
+ * member is the longest one that starts there (the first of them in
+ * `members` on a tie). At most the first `limit` places.
+ *
+ * Each member's occurrences are in text order, so they are merged through a
+ * heap and the merge stops once `limit` places are complete.
  */
-export function placesOf(set: PhraseSet, members: ArrayLike<number>): Place[] {
-  let total = 0;
-  for (let k = 0; k < members.length; k++) total += set.positionStart[members[k]! + 1]! - set.positionStart[members[k]!]!;
-  // Occurrences as start × 32 + (31 − length): by start, longest first.
-  const keys = new Float64Array(total);
-  // Start → the longest member starting there (the first of them, in member order).
-  const longest = new Map<number, number>();
-  let n = 0;
-  for (let k = 0; k < members.length; k++) {
-    const m = members[k]!;
-    const len = lengthOf(set, m);
-    for (let r = set.positionStart[m]!; r < set.positionStart[m + 1]!; r++) {
-      const p = set.positions[r]!;
-      keys[n++] = p * 32 + (31 - len);
-      const other = longest.get(p);
-      if (other === undefined || lengthOf(set, other) < len) longest.set(p, m);
+export function placesOf(set: PhraseSet, members: ArrayLike<number>, limit = Infinity): Place[] {
+  const { positions, positionStart } = set;
+  const k = members.length;
+  // Heap of member indices (into `members`) by their next occurrence: start,
+  // then longest first, then member order. `next[i]` is that occurrence's index in `positions`.
+  const next = new Int32Array(k);
+  const key = new Float64Array(k);
+  const heap = new Int32Array(k);
+  let size = 0;
+  const less = (x: number, y: number): boolean => key[x]! < key[y]! || (key[x] === key[y] && x < y);
+  const down = (at: number): void => {
+    for (;;) {
+      let least = at;
+      const l = 2 * at + 1;
+      if (l < size && less(heap[l]!, heap[least]!)) least = l;
+      if (l + 1 < size && less(heap[l + 1]!, heap[least]!)) least = l + 1;
+      if (least === at) return;
+      [heap[at], heap[least]] = [heap[least]!, heap[at]!];
+      at = least;
     }
+  };
+  for (let i = 0; i < k; i++) {
+    const m = members[i]!;
+    next[i] = positionStart[m]!;
+    if (next[i]! === positionStart[m + 1]!) continue;
+    key[i] = positions[next[i]!]! * 32 + (31 - lengthOf(set, m));
+    heap[size++] = i;
   }
-  keys.sort();
+  for (let at = (size >> 1) - 1; at >= 0; at--) down(at);
+
   const places: Place[] = [];
-  for (let i = 0; i < n; i++) {
-    const p = Math.floor(keys[i]! / 32);
-    const end = p + 31 - (keys[i]! - p * 32);
+  while (size > 0) {
+    const i = heap[0]!;
+    const m = members[i]!;
+    const p = positions[next[i]!]!;
+    const end = p + lengthOf(set, m);
     const last = places[places.length - 1];
     if (last && p < last[1]) last[1] = Math.max(last[1], end);
-    else places.push([p, end, longest.get(p)!]);
+    else if (places.length === limit) break;
+    else places.push([p, end, m]);
+    // The member's next occurrence, or out of the heap.
+    if (++next[i]! < positionStart[m + 1]!) key[i] = positions[next[i]!]! * 32 + (31 - lengthOf(set, m));
+    else heap[0] = heap[--size]!;
+    down(0);
   }
   return places;
 }

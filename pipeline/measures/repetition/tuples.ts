@@ -19,6 +19,9 @@ export interface TupleTable {
   find(items: ArrayLike<number>, from: number, to: number, at?: number, gap?: Gap): number;
   /** False when no tuple with this hash was ever added (a quick test before `findHashed`; true may be a false alarm). */
   mayHold(hash: number): boolean;
+  /** The bits `mayHold` reads, for loops that test them in line: bit `hash >>> filterShift` of `filter`. */
+  readonly filter: Int32Array;
+  readonly filterShift: number;
   /** As `find`, with the key's hash already known (from `gapHasher` or `tupleHash`). */
   findHashed(hash: number, items: ArrayLike<number>, from: number, to: number, at?: number, gap?: Gap): number;
 }
@@ -188,6 +191,8 @@ export function tupleTable(expected: number): TupleTable {
       const bit = h >>> filterShift;
       return (filter[bit >>> 5]! & (1 << (bit & 31))) !== 0;
     },
+    filter,
+    filterShift,
     findHashed,
   };
 }
