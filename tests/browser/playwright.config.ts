@@ -1,6 +1,7 @@
 import { defineConfig } from '@playwright/test';
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
+import { checkoutPort } from '../support/ports.ts';
 
 // The web server command runs from this folder; the site is built at the project root.
 const ROOT = resolve(import.meta.dirname, '../..');
@@ -9,7 +10,7 @@ const tmp = resolve(ROOT, '.vitrine/browser-tmp');
 mkdirSync(tmp, { recursive: true });
 process.env.TMPDIR = tmp;
 
-export const PORT = 4329;
+export const PORT = checkoutPort(1);
 export const BASE = '/exhibit/';
 
 export default defineConfig({

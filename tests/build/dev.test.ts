@@ -3,9 +3,10 @@ import { spawn } from 'node:child_process';
 import { readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { ROOT, cleanEnv, demoCopy } from './helpers.ts';
+import { checkoutPort } from '../support/ports.ts';
 
 const { dir, plan } = demoCopy();
-const port = 4477;
+const port = checkoutPort(2);
 const server = spawn(process.execPath, [join(ROOT, 'bin/vitrine.mjs'), 'dev', plan, '--port', String(port)], {
   cwd: dir,
   env: cleanEnv(),
