@@ -1,5 +1,8 @@
-import { describe, expect, it } from 'vitest';
-import { normaliseSvg } from './snapshot.ts';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { expectSvgSnapshot, inCi, normaliseSvg } from './snapshot.ts';
 
 describe('normaliseSvg', () => {
   it('renumbers ids everywhere they are referred to', () => {
@@ -13,5 +16,48 @@ describe('normaliseSvg', () => {
     const a = '<svg aria-labelledby="a-title"><title id="a-title">T</title><rect x="1.00000001"/></svg>';
     const b = '<svg aria-labelledby="zz-title"><title id="zz-title">T</title><rect x="0.99999999"/></svg>';
     expect(normaliseSvg(a)).toBe(normaliseSvg(b));
+  });
+});
+
+describe('expectSvgSnapshot', () => {
+  const svg = '<svg><rect x="1"/></svg>';
+  let dir = '';
+  const fresh = () => (dir = mkdtempSync(join(tmpdir(), 'vt-snap-')));
+  afterEach(() => {
+    vi.unstubAllEnvs();
+    if (dir) rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('reads CI as CI services set it (common practice, no source)', () => {
+    expect(inCi({})).toBe(false);
+    expect(inCi({ CI: '' })).toBe(false);
+    expect(inCi({ CI: 'false' })).toBe(false);
+    expect(inCi({ CI: '0' })).toBe(false);
+    expect(inCi({ CI: 'true' })).toBe(true);
+    expect(inCi({ CI: '1' })).toBe(true);
+  });
+
+  it('writes a missing snapshot outside CI', () => {
+    vi.stubEnv('CI', '');
+    fresh();
+    expectSvgSnapshot('new', svg, dir);
+    expect(readFileSync(join(dir, 'new.svg'), 'utf8')).toBe(normaliseSvg(svg));
+  });
+
+  it('fails on a missing snapshot in CI, and writes nothing', () => {
+    vi.stubEnv('CI', 'true');
+    fresh();
+    expect(() => expectSvgSnapshot('gone', svg, dir)).toThrow(/missing/);
+    expect(existsSync(join(dir, 'gone.svg'))).toBe(false);
+  });
+
+  it('fails on a changed drawing anywhere, leaving the new one beside the old', () => {
+    vi.stubEnv('CI', 'true');
+    fresh();
+    writeFileSync(join(dir, 'old.svg'), normaliseSvg('<svg><rect x="2"/></svg>'));
+    expect(() => expectSvgSnapshot('old', svg, dir)).toThrow(/differs/);
+    expect(readFileSync(join(dir, 'old-changed.svg'), 'utf8')).toBe(normaliseSvg(svg));
+    expectSvgSnapshot('old', '<svg><rect x="2"/></svg>', dir);
+    expect(existsSync(join(dir, 'old-changed.svg'))).toBe(false);
   });
 });

@@ -1,9 +1,13 @@
 /**
  * Expected-SVG snapshots kept as files under tests/charts/snapshots. Before
  * comparing, numbers are cleaned to 3 decimals and ids renumbered in order
- * of appearance, and tags are put one per line so a diff reads well. A
- * missing snapshot is written and the check passes; a different one is
- * written beside it as "<name>-changed.svg" and the check fails.
+ * of appearance, and tags are put one per line so a diff reads well.
+ *
+ * A missing snapshot is written only outside CI (the `CI` variable unset,
+ * empty, "0" or "false"), and the check passes; in CI it fails, so a
+ * snapshot deleted by mistake cannot pass unnoticed. A drawing that differs
+ * from its snapshot fails anywhere and is written beside it as
+ * "<name>-changed.svg" (ignored by git) for a reader to compare.
  */
 
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -12,6 +16,12 @@ import { fileURLToPath } from 'node:url';
 import { expect } from 'vitest';
 
 const DIR = join(dirname(fileURLToPath(import.meta.url)), 'snapshots');
+
+/** Whether the tests run in continuous integration, judged from the `CI` variable as CI services set it. */
+export function inCi(env: NodeJS.ProcessEnv = process.env): boolean {
+  const v = (env.CI ?? '').trim().toLowerCase();
+  return v !== '' && v !== '0' && v !== 'false';
+}
 
 /** Numbers to at most 3 decimals, ids renumbered ("id-1", "id-2", …), one tag per line. */
 export function normaliseSvg(svg: string): string {
@@ -28,13 +38,17 @@ export function normaliseSvg(svg: string): string {
   return `${out.replace(/></g, '>\n<')}\n`;
 }
 
-/** Compares `svg` with the stored snapshot `name` (see the file comment). */
-export function expectSvgSnapshot(name: string, svg: string): void {
-  mkdirSync(DIR, { recursive: true });
-  const file = join(DIR, `${name}.svg`);
-  const changed = join(DIR, `${name}-changed.svg`);
+/** Compares `svg` with the stored snapshot `name` (see the file comment); `dir` is for the tests of this file. */
+export function expectSvgSnapshot(name: string, svg: string, dir: string = DIR): void {
+  const file = join(dir, `${name}.svg`);
+  const changed = join(dir, `${name}-changed.svg`);
   const actual = normaliseSvg(svg);
   if (!existsSync(file)) {
+    expect(
+      inCi(),
+      `SVG snapshot "${name}" is missing (${file}); run the tests outside CI to write it, look at it, and commit it`,
+    ).toBe(false);
+    mkdirSync(dir, { recursive: true });
     writeFileSync(file, actual);
     return;
   }
