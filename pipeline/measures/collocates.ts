@@ -56,7 +56,7 @@ export interface Collocate {
   right: number;
   /** The word's frequency in the whole text. */
   frequency: number;
-  /** Co-occurrences expected by chance: f(node) · W · f(word) / N. */
+  /** Co-occurrences expected by chance: S · f(word) / N, with S the window slots actually open (see `slots`). */
   expected: number;
   pmi: number;
   tScore: number;
@@ -71,6 +71,12 @@ export interface CollocatesResult {
   window: { left: number; right: number; boundary: 'sentence' | 'paragraph' | 'chapter' };
   /** Tokens in the text (N). */
   tokens: number;
+  /**
+   * Window slots S: the positions actually inside some window of the node, each counted once, the
+   * node's own positions left out. At most f(node) · (left + right); less when windows are cut at a
+   * boundary or overlap.
+   */
+  slots: number;
   /** Distinct words in the windows (after the stopword filter), before `minFrequency` and `top`. */
   candidates: number;
   stopwordList: string | null;
@@ -92,7 +98,7 @@ const LABELS: Record<SortKey, string> = {
 
 export const collocates: Measure<CollocatesParams, CollocatesResult> = {
   name: 'collocates',
-  version: 1,
+  version: 2,
   params: collocatesParams,
   needsCast: false,
   compute({ model, language }, params) {
@@ -113,6 +119,7 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
     const rightCount = new Uint32Array(vocab.length);
     // Windows come in text order with non-decreasing ends, so one pointer keeps a position from being counted twice.
     let counted = -1;
+    let slots = 0;
     for (const i of hits) {
       const last = i + len - 1;
       let lo = Math.max(0, i - params.left);
@@ -121,6 +128,7 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
       while (unit[hi] !== unit[last]) hi--;
       for (let p = Math.max(lo, counted + 1); p <= hi; p++) {
         if (isNode[p]) continue;
+        slots++;
         if (p < i) leftCount[type[p]!]!++;
         else rightCount[type[p]!]!++;
       }
@@ -129,7 +137,6 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
 
     const freq = new Uint32Array(vocab.length);
     for (let i = 0; i < n; i++) freq[type[i]!]!++;
-    const span = params.left + params.right;
     const fNode = hits.length;
     let candidates = 0;
     const rows: Collocate[] = [];
@@ -145,9 +152,9 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
         left: leftCount[t]!,
         right: rightCount[t]!,
         frequency: f,
-        expected: round((fNode * span * f) / n, 4),
-        pmi: round(pmi(o, fNode * span, f, n)!, 4),
-        tScore: round(tScore(o, fNode * span, f, n)!, 4),
+        expected: round((slots * f) / n, 4),
+        pmi: round(pmi(o, slots, f, n)!, 4),
+        tScore: round(tScore(o, slots, f, n)!, 4),
         logDice: round(logDice(o, fNode, f)!, 4),
       });
     }
@@ -159,6 +166,7 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
       nodeFrequency: fNode,
       window: { left: params.left, right: params.right, boundary: params.boundary },
       tokens: n,
+      slots,
       candidates,
       stopwordList: params.stopwords ? (hasStopwords(language) ? `stopwords-iso (${language})` : null) : null,
       sort: params.sort,
@@ -168,9 +176,9 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
   method: {
     what: 'The words that keep company with a given word or phrase (its collocates): which words turn up within a few words of it more often than chance would have them, and how strongly they are tied to it.',
     formula:
-      "Every occurrence of the node opens a window of `left` words before it and `right` words after it, cut at the edge of its sentence (or paragraph, or chapter). O = how many window positions hold the collocate (a position shared by two overlapping windows counts once; positions inside any occurrence of the node never count). With f(n) the node's frequency, f(c) the collocate's, N the words in the text and W = left + right: E = f(n)·W·f(c)/N, the co-occurrences expected by chance; PMI = log₂(O/E); t-score = (O − E)/√O; logDice = 14 + log₂(2O/(f(n) + f(c))).",
+      "Every occurrence of the node opens a window of `left` words before it and `right` words after it, cut at the edge of its sentence (or paragraph, or chapter). O = how many window positions hold the collocate (a position shared by two overlapping windows counts once; positions inside any occurrence of the node never count). S = the window slots: how many positions the windows cover once so counted. With f(n) the node's frequency, f(c) the collocate's and N the words in the text: E = S·f(c)/N, the co-occurrences expected by chance (each slot holds the collocate with probability f(c)/N); PMI = log₂(O/E); t-score = (O − E)/√O; logDice = 14 + log₂(2O/(f(n) + f(c))). When no window is cut or overlaps another, S = f(n)·W with W = left + right, and E is the usual f(n)·W·f(c)/N; counting S instead keeps short sentences and clustered occurrences from deflating PMI.",
     source:
-      'PMI: Church & Hanks (1990, "Word association norms, mutual information, and lexicography", Computational Linguistics 16(1)); t-score: Church, Gale, Hanks & Hindle (1991, "Using statistics in lexical analysis"); logDice: Rychlý (2008, "A lexicographer-friendly association score", RASLAN). The window-scaled expectation f(n)·W·f(c)/N is common practice for window collocation.',
+      'PMI: Church & Hanks (1990, "Word association norms, mutual information, and lexicography", Computational Linguistics 16(1)); t-score: Church, Gale, Hanks & Hindle (1991, "Using statistics in lexical analysis"); logDice: Rychlý (2008, "A lexicographer-friendly association score", RASLAN). For a window, the expectation scales the collocate’s rate f(c)/N by the number of positions examined; counting those positions after cutting and merging, rather than assuming W per occurrence, is this measure’s own choice, stated in the formula above.',
     caveats: [
       'PMI rewards rare words: a word seen twice, both times beside the node, scores very high. Raise `minFrequency` or rank by logDice or t-score.',
       't-score favours frequent words and grows with the amount of evidence; it is a confidence score more than a strength score.',

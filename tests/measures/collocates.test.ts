@@ -32,14 +32,47 @@ describe('collocates', () => {
     const r = collocates.compute(ctx, collocates.params.parse({ ...base, boundary: 'paragraph' }));
     const weir = r.collocates.find((c) => c.word === 'weir')!;
     expect(weir.cooccurrences).toBe(2);
-    // Hand-worked: N = 15, f(heron) = 2, W = 2 + 4 = 6, f(weir) = 2, O = 2: E = 2·6·2/15 = 1.6,
-    // PMI = log₂(2/1.6) ≈ 0.3219 (Church & Hanks 1990), t = (2 − 1.6)/√2 ≈ 0.2828 (Church et al. 1991),
-    // logDice = 14 + log₂(2·2/(2 + 2)) = 14 (Rychlý 2008).
-    expect(weir.expected).toBeCloseTo(1.6, 4);
-    expect(weir.pmi).toBeCloseTo(Math.log2(2 / 1.6), 4);
-    expect(weir.tScore).toBeCloseTo(0.4 / Math.SQRT2, 4);
+    // Regression values worked by hand from the formulas (no published example uses these counts): N = 15,
+    // f(heron) = 2, f(weir) = 2, O = 2. Slots: heron(1) has one word to its left (the text starts) and
+    // four to its right, 5; heron(8) has a grey | stood still the weir, 6 — S = 11, not 2·(2 + 4) = 12.
+    // E = 11·2/15 ≈ 1.4667, PMI = log₂(2/1.4667) ≈ 0.4475 (Church & Hanks 1990), t = (2 − 1.4667)/√2 ≈ 0.3771
+    // (Church et al. 1991), logDice = 14 + log₂(2·2/(2 + 2)) = 14 (Rychlý 2008).
+    expect(r.slots).toBe(11);
+    expect(weir.expected).toBeCloseTo(1.4667, 4);
+    expect(weir.pmi).toBeCloseTo(0.4475, 4);
+    expect(weir.tScore).toBeCloseTo(0.3771, 4);
     expect(weir.logDice).toBe(14);
     expect(r.collocates.find((c) => c.word === 'the')!.cooccurrences).toBe(3);
+  });
+
+  it('counts the window slots actually open in short sentences, and scores E, PMI and t from them', () => {
+    // Regression value counted by hand (no published worked example of the slot count was found).
+    // heron(0) waits(1) | rain(2) falls(3) on(4) the(5) heron(6) | the(7) heron(8) and(9) the(10) heron(11) fish(12).
+    // Window 2 + 2, cut at sentence ends. heron(0): waits — 1 slot. heron(6): on the — 2. heron(8): the | and the — 3.
+    // heron(11): its left words "and the" are already counted by heron(8) — fish, 1. S = 7, against 4·4 = 16 assumed
+    // by f(n)·W. f(the) = 3, O(the) = 3, N = 13: E = 7·3/13 ≈ 1.6154, PMI = log₂(3/1.6154) ≈ 0.8931,
+    // t = (3 − 1.6154)/√3 ≈ 0.7994. With 16 slots E would be 3.6923 and PMI −0.2996.
+    const text = 'Heron waits. Rain falls on the heron. The heron and the heron fish.\n';
+    const r = collocates.compute(context(text), collocates.params.parse({ ...base, left: 2, right: 2 }));
+    expect(r.tokens).toBe(13);
+    expect(r.nodeFrequency).toBe(4);
+    expect(r.slots).toBe(7);
+    const co = Object.fromEntries(r.collocates.map((c) => [c.word, c.cooccurrences]));
+    expect(co).toEqual({ waits: 1, on: 1, the: 3, and: 1, fish: 1 });
+    const the = r.collocates.find((c) => c.word === 'the')!;
+    expect(the.expected).toBeCloseTo(1.6154, 4);
+    expect(the.pmi).toBeCloseTo(0.8931, 4);
+    expect(the.tScore).toBeCloseTo(0.7994, 4);
+  });
+
+  it('has S = f(n)·W when no window is cut or overlaps, so E is the usual f(n)·W·f(c)/N', () => {
+    // Two occurrences with two words on each side inside one long sentence: S = 2·4 = 8 (by hand).
+    const text = 'One two heron three four five six seven eight nine ten heron eleven twelve thirteen.\n';
+    const r = collocates.compute(context(text), collocates.params.parse({ ...base, left: 2, right: 2 }));
+    expect(r.slots).toBe(2 * 4);
+    const two = r.collocates.find((c) => c.word === 'two')!;
+    // f(two) = 1, N = 15: E = 8·1/15 = f(n)·W·f(c)/N with f(n) = 2, W = 4.
+    expect(two.expected).toBeCloseTo((2 * 4 * 1) / 15, 4);
   });
 
   it('counts a position once when two windows overlap, and never the node itself', () => {
