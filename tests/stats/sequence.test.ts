@@ -13,6 +13,18 @@ describe('findSequence', () => {
     expect(findSequence(types, [])).toEqual([]);
   });
 
+  it('finds what Node’s own Buffer.indexOf finds', () => {
+    // Source: Node.js Buffer.prototype.indexOf, run here as the reference: each type id written as one byte,
+    // every match found by searching again one byte after the last.
+    const column = Array.from({ length: 400 }, (_, i) => (i * 7 + ((i * i) % 5)) % 4);
+    const bytes = Buffer.from(column);
+    for (const needle of [[1, 2], [3], [0, 3, 2], [2, 2, 2]]) {
+      const expected: number[] = [];
+      for (let at = bytes.indexOf(Buffer.from(needle)); at !== -1; at = bytes.indexOf(Buffer.from(needle), at + 1)) expected.push(at);
+      expect(findSequence(column, needle)).toEqual(expected);
+    }
+  });
+
   it('finds overlapping matches', () => {
     expect(findSequence([3, 3, 3], [3, 3])).toEqual([0, 1]);
   });

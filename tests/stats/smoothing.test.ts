@@ -1,4 +1,5 @@
 import { describe, it, expect } from 'vitest';
+import dct from 'dct';
 import { dctCoefficients, lowPass, movingAverage } from '../../pipeline/stats/smoothing.ts';
 
 const N = 200;
@@ -56,6 +57,14 @@ describe('low-pass (discrete cosine transform)', () => {
     const mixed = sine(1).map((v, i) => v + sine(40)[i]!);
     const out = lowPass(mixed, 12);
     expect(rms(out.map((v, i) => v - sine(1)[i]!))).toBeLessThan(0.05);
+  });
+
+  it('agrees with the DCT-II of the npm package dct', () => {
+    // Source: dct 0.1 (npm), run here as the reference; it computes scale · Σ xₙ cos(π k (n + ½)/N), so scale 1.
+    const x = sine(2).map((v, i) => v + ((i * 37) % 11) / 10);
+    const ref = dct(x, 1);
+    const ours = dctCoefficients(x, 20);
+    for (let k = 0; k < 20; k++) expect(ours[k]).toBeCloseTo(ref[k]!, 8);
   });
 
   it('computes the DCT-II coefficients of a short series', () => {

@@ -1,4 +1,5 @@
 import { describe, it, expect } from 'vitest';
+import { jStat } from 'jstat';
 import { equalSegments, meanAndSd, positionRanges, prefixSums, rangeOf, windowStarts } from '../../pipeline/stats/windows.ts';
 
 describe('windowStarts', () => {
@@ -41,5 +42,19 @@ describe('equal segments and ranges', () => {
     // Population SD of 2, 4, 4, 4, 5, 5, 7, 9 is 2 (textbook example, common practice, no source).
     expect(meanAndSd([2, 4, 4, 4, 5, 5, 7, 9])).toEqual({ mean: 5, sd: 2 });
     expect(meanAndSd([])).toBeNull();
+  });
+
+  it('agrees with the mean and population standard deviation of jStat', () => {
+    // Source: jStat 1.9 `mean` and `stdev` (population), run here as the reference.
+    const series = [
+      [3.5, -1.25, 0, 12, 7.75],
+      Array.from({ length: 200 }, (_, i) => Math.sin(i / 7) * 4 + (i % 13)),
+      [42],
+    ];
+    for (const v of series) {
+      const r = meanAndSd(v)!;
+      expect(r.mean).toBeCloseTo(jStat.mean(v), 12);
+      expect(r.sd).toBeCloseTo(jStat.stdev(v), 12);
+    }
   });
 });
