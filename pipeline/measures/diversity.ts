@@ -24,7 +24,7 @@ export const diversityParams = z
       .min(2)
       .max(100000)
       .default(500)
-      .describe('MATTR window, in words. A chapter or segment shorter than the window gets its plain type–token ratio instead, and is flagged. Default: 500 (the default of Covington & McFall’s program, from memory).'),
+      .describe('MATTR window, in words. A chapter or segment shorter than the window gets its plain type–token ratio instead, and is flagged. Default: 500: a window of a page or two, long enough that a single sentence or refrain does not swing it, short enough that a chapter of a few thousand words yields many windows (this measure’s choice: the window is a free parameter of MATTR).'),
     threshold: z
       .number()
       .gt(0)
@@ -137,7 +137,7 @@ export const diversity: Measure<DiversityParams, DiversityResult> = {
   method: {
     what: 'How varied the vocabulary is: how often the text brings in a word it has not used before, measured in ways that do not simply reward shorter chapters.',
     formula:
-      'TTR = distinct word forms ÷ words. MATTR = the mean TTR of every run of W consecutive words (the window moving one word at a time; W = `window`, 500 by default as in Covington & McFall’s program, from memory); a span shorter than W gets its plain TTR, flagged. MTLD: reading forward, the TTR of the current stretch is updated after each word; when it falls to the threshold (0.72) or below a factor is complete and a new stretch begins; the words left at the end add a partial factor (1 − TTR) ÷ (1 − 0.72), which is 0 when every leftover word is new. MTLD = words ÷ factors, read forward and backward and averaged; undefined (shown empty) if no factor at all. Words are lower-cased word forms, not lemmas.',
+      'TTR = distinct word forms ÷ words. MATTR = the mean TTR of every run of W consecutive words (the window moving one word at a time; W = `window`, 500 by default, about a page or two of prose); a span shorter than W gets its plain TTR, flagged. MTLD: reading forward, the TTR of the current stretch is updated after each word; when it falls to the threshold (0.72) or below a factor is complete and a new stretch begins; the words left at the end add a partial factor (1 − TTR) ÷ (1 − 0.72), which is 0 when every leftover word is new. MTLD = words ÷ factors, read forward and backward and averaged; undefined (shown empty) if no factor at all. Words are lower-cased word forms, not lemmas.',
     source:
       'Covington, M. A. & McFall, J. D. (2010), “Cutting the Gordian knot: the moving-average type–token ratio (MATTR)”, Journal of Quantitative Linguistics 17(2); McCarthy, P. M. & Jarvis, S. (2010), “MTLD, vocd-D, and HD-D: a validation study of sophisticated approaches to lexical diversity assessment”, Behavior Research Methods 42(2).',
     caveats: [

@@ -23,7 +23,7 @@ describe('diversity', () => {
     const ch2 = run({ window: 3 }).positions[1]!;
     expect(ch2).toMatchObject({ tokens: 6, types: 3, mattrWindows: 4, mattrFallback: false });
     expect(ch2.mattr).toBeCloseTo(11 / 12, 4);
-    // Default window 500 (Covington & McFall's program default, from memory) is longer than the chapter.
+    // Default window 500 (the measure's own default, stated on its method card) is longer than the chapter.
     const fallback = run().positions[1]!;
     expect(fallback).toMatchObject({ mattr: 0.5, mattrWindows: 0, mattrFallback: true });
     expect(diversity.table(run(), diversity.params.parse({})).rows[1]![5]).toMatch(/shorter than the window/);

