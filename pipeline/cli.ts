@@ -11,8 +11,8 @@
  * 2 the command line is wrong; 3 an unexpected internal failure.
  */
 import { parseArgs } from 'node:util';
-import { cpSync, existsSync, mkdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
-import { basename, dirname, join, resolve } from 'node:path';
+import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
 import { z } from 'zod';
@@ -27,6 +27,8 @@ import { ResultCache } from './cache/cache.ts';
 import { castMemberSchema } from './plan/schema.ts';
 import type { CastMember } from './text/model.ts';
 import { nearest } from './plan/suggest.ts';
+import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './output.ts';
+import type { Protected } from './output.ts';
 
 export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
 
@@ -326,17 +328,21 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
   const quiet = !!values.quiet;
   const log = quiet ? undefined : (m: string) => io.out(m + '\n');
   const started = performance.now();
-  // Check everything first: a plan with problems never reaches Astro and never touches the output folder.
+  const builds = resolve(ROOT, '.vitrine/builds');
+  cleanStaleBuilds(builds, out);
+  // Check everything first: a plan with problems, or an output folder that is not a build's
+  // own, never reaches Astro and never touches the output folder.
   const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log });
-  if (hasErrors(result.problems)) {
-    report(result.problems, io);
-    io.err(`Nothing was built; ${out} is unchanged. ${summaryLine(result.problems)}.\n`);
+  const problems = [...result.problems, ...checkOutputFolder(out, protectedPaths(plan, result))];
+  if (hasErrors(problems)) {
+    report(problems, io);
+    io.err(`Nothing was built; ${out} is unchanged. ${summaryLine(problems)}.\n`);
     return EXIT.problems;
   }
-  report(result.problems, io);
+  report(problems, io);
   // Astro's prerender step imports packages from the build folder, so it must sit inside the
   // project (where node_modules resolves); it is moved beside the output folder afterwards.
-  const work = resolve(ROOT, '.vitrine/builds', `${process.pid}-${Date.now()}`);
+  const work = resolve(builds, `${process.pid}-${Date.now()}`);
   const env = { VITRINE_PLAN: plan, VITRINE_OUT_DIR: work, VITRINE_CACHE_DIR: cacheDir(values) ?? '', VITRINE_BASE: values.base ?? '' };
   const saved = Object.fromEntries(Object.keys(env).map((k) => [k, process.env[k]]));
   Object.assign(process.env, env);
@@ -347,6 +353,7 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     const astro = await import('astro');
     await astro.build({ root: ROOT, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
     if (!existsSync(join(work, 'index.html'))) throw new Error('the site build finished without writing index.html');
+    markBuild(work);
   } catch (e) {
     rmSync(work, { recursive: true, force: true });
     io.err(`The site build failed: ${(e as Error).message}\nNothing was changed in ${out}.\n`);
@@ -358,39 +365,26 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
       else process.env[k] = v;
     }
   }
-  swapInto(work, out);
+  const late = swapInto(work, out);
+  if (late.length) {
+    report(late, io);
+    io.err(`The new site was discarded; ${out} is unchanged.\n`);
+    return EXIT.problems;
+  }
   const pages = result.prepared!.rooms.reduce((s, r) => s + r.panels.length, 0);
   if (!quiet) io.out(`Built ${result.prepared!.exhibit.title}: ${result.prepared!.rooms.length} rooms, ${pages} panels → ${out} (${((performance.now() - started) / 1000).toFixed(1)} s)\n`);
   return EXIT.ok;
 }
 
-/**
- * Replace `out` with the freshly built `work` folder. The new site is first
- * moved (or, across file systems, copied) beside `out`; then two renames on
- * the same file system swap it in, and only then is the old site deleted.
- */
-function swapInto(work: string, out: string): void {
-  mkdirSync(dirname(out), { recursive: true });
-  const stamp = `${process.pid}-${Date.now()}`;
-  const staged = join(dirname(out), `.${basename(out)}.new-${stamp}`);
-  const old = join(dirname(out), `.${basename(out)}.old-${stamp}`);
-  try {
-    renameSync(work, staged);
-  } catch (e) {
-    if ((e as NodeJS.ErrnoException).code !== 'EXDEV') throw e;
-    cpSync(work, staged, { recursive: true });
-    rmSync(work, { recursive: true, force: true });
-  }
-  const had = existsSync(out);
-  if (had) renameSync(out, old);
-  try {
-    renameSync(staged, out);
-  } catch (e) {
-    if (had) renameSync(old, out);
-    rmSync(staged, { recursive: true, force: true });
-    throw e;
-  }
-  if (had) rmSync(old, { recursive: true, force: true });
+/** What an output folder must neither be nor hold: the exhibit and everything it names, Vitrine itself, the working folder. */
+function protectedPaths(plan: string, result: PrepareResult): Protected[] {
+  const named = [...result.watch, ...(result.prepared?.captionFiles ?? []).map((f) => resolve(result.dir, f))];
+  return [
+    { path: dirname(plan), what: 'the exhibit folder' },
+    { path: ROOT, what: "Vitrine's own folder" },
+    { path: process.cwd(), what: 'the folder this command was run from' },
+    ...named.map((f) => ({ path: f, what: f === plan ? 'the plan' : 'a file the plan names' })),
+  ];
 }
 
 // ——— dev ———

@@ -177,6 +177,8 @@ describe('vitrine build', () => {
     const first = vitrine(['build', plan, '--out', join(dir, 'dist')], dir, { VITRINE_CACHE_DIR: join(dir, 'cache') });
     expect(first.status).toBe(0);
     expect(first.stdout).toMatch(/[1-9]\d* computed/);
+    // The build marks its folder, so the next build may replace it.
+    expect(readFileSync(join(dir, 'dist', '.vitrine-build'), 'utf8')).toMatch(/^vitrine build output\n/);
     const caption = join(dir, 'content', demoPanels[0]!.caption);
     writeFileSync(caption, readFileSync(caption, 'utf8') + '\nA sentence added by the curator.\n');
     const second = vitrine(['build', plan, '--out', join(dir, 'dist')], dir, { VITRINE_CACHE_DIR: join(dir, 'cache') });
