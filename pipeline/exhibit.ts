@@ -15,8 +15,8 @@ import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 
 import { loadPlan } from './plan/load.ts';
-import type { Problem } from './problems.ts';
-import { hasErrors } from './problems.ts';
+import type { Problem } from './problems/problem.ts';
+import { hasErrors } from './problems/problem.ts';
 import { planRegistry } from './registry.ts';
 import { measures } from './measures/registry.ts';
 import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';

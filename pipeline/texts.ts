@@ -10,7 +10,7 @@ import { decodeText } from './text/decode.ts';
 import { buildTextModel } from './text/build.ts';
 import { findMentions } from './text/mentions.ts';
 import type { CastMember, Mentions, TextModel, TextOptions } from './text/model.ts';
-import type { Problem } from './problems.ts';
+import type { Problem } from './problems/problem.ts';
 import { stableJson } from './cache/cache.ts';
 
 export interface OpenedText {

@@ -4,7 +4,7 @@
  * column of the offending value in the YAML.
  */
 import type { z } from 'zod';
-import type { Problem } from '../problems.ts';
+import type { Problem } from '../problems/problem.ts';
 import { allowedKeys, descriptionOf, schemaAt } from './schema-walk.ts';
 import { formatPath } from './source.ts';
 import type { PathSegment, PlanSource } from './source.ts';

@@ -6,8 +6,8 @@
  */
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import type { Problem } from '../problems.ts';
-import { hasErrors } from '../problems.ts';
+import type { Problem } from '../problems/problem.ts';
+import { hasErrors } from '../problems/problem.ts';
 import { checkFiles } from './check-files.ts';
 import { checkSharedNames, checkUniqueIds } from './check-ids.ts';
 import { checkPanels } from './check-panels.ts';

@@ -3,7 +3,7 @@
  * validation: cross-checks run on whatever is well-formed, so that one run
  * reports every problem.
  */
-import type { Problem, Severity } from '../problems.ts';
+import type { Problem, Severity } from '../problems/problem.ts';
 import type { PathSegment, PlanSource, Position } from './source.ts';
 import { formatPath } from './source.ts';
 

@@ -5,7 +5,7 @@
  */
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, visit } from 'yaml';
 import type { Document, Node as YamlNode } from 'yaml';
-import type { Problem } from '../problems.ts';
+import type { Problem } from '../problems/problem.ts';
 import { wordYamlError } from './yaml-messages.ts';
 
 /** A step into the plan: a mapping key or a 0-based list index. */

@@ -4,7 +4,7 @@
  * and every entry knows where it stands in the YAML so that later problems
  * about it can point there.
  */
-import type { Problem } from '../problems.ts';
+import type { Problem } from '../problems/problem.ts';
 import type { DialogueData, NoteAnchor, Pronoun } from './schema.ts';
 
 /** Where an entry is written in the plan: spread it into a Problem. */

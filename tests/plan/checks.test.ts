@@ -6,7 +6,7 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { loadPlan } from '../../pipeline/plan/load.ts';
 import type { PlanResult } from '../../pipeline/plan/load.ts';
-import type { Problem } from '../../pipeline/problems.ts';
+import type { Problem } from '../../pipeline/problems/problem.ts';
 import { fakeRegistry } from './fake-registry.ts';
 import { baseFiles, tempExhibit } from './temp-exhibit.ts';
 import type { TempExhibit } from './temp-exhibit.ts';
