@@ -21,14 +21,14 @@ import type { PrepareResult } from './exhibit.ts';
 import { formatProblem, hasErrors } from './problems/problem.ts';
 import type { Problem } from './problems/problem.ts';
 import { measures } from './measures/registry.ts';
-import { tableToCsv } from './csv.ts';
-import { readText } from './texts.ts';
+import { tableToCsv } from './stages/csv.ts';
+import { readText } from './stages/read-text.ts';
 import { ResultCache } from './cache/cache.ts';
 import { castMemberSchema } from './plan/schema.ts';
 import type { CastMember } from './text/model.ts';
 import { nearest } from './plan/suggest.ts';
-import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './output.ts';
-import type { Protected } from './output.ts';
+import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './stages/output.ts';
+import type { Protected } from './stages/output.ts';
 
 export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
 

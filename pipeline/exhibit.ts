@@ -7,7 +7,7 @@
  *                reading options, measure name + version + params, cast, language)
  *   4. notes     resolve each curator note against the panel's chart data
  *   5. charts    draw each panel as SVG, with alt text and data table
- *   6. assemble  the PreparedExhibit the site renders (pipeline/prepared.ts)
+ *   6. assemble  the PreparedExhibit the site renders (pipeline/stages/prepared.ts)
  *
  * Nothing here writes outside the cache folder; the site build is Astro's job.
  */
@@ -17,23 +17,23 @@ import { createHash } from 'node:crypto';
 import { loadPlan } from './plan/load.ts';
 import type { Problem } from './problems/problem.ts';
 import { hasErrors } from './problems/problem.ts';
-import { planRegistry } from './registry.ts';
+import { planRegistry } from './stages/registry.ts';
 import { measures } from './measures/registry.ts';
 import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
-import { readLexicons } from './read-lexicons.ts';
+import { readLexicons } from './stages/read-lexicons.ts';
 import { checkPins } from './dialogue/pins.ts';
 import { findQuotes } from './dialogue/quotes.ts';
 import { charts } from './charts/index.ts';
 import type { ChartData, PinnedNote } from './charts/types.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
-import { readText } from './texts.ts';
-import type { ReadText } from './texts.ts';
+import { readText } from './stages/read-text.ts';
+import type { ReadText } from './stages/read-text.ts';
 import type { CastMember, TextOptions } from './text/model.ts';
-import type { PreparedExhibit, PreparedMethod, PreparedNote, PreparedPanel, PreparedRoom, PreparedText } from './prepared.ts';
+import type { PreparedExhibit, PreparedMethod, PreparedNote, PreparedPanel, PreparedRoom, PreparedText } from './stages/prepared.ts';
 import type { StructureResult } from './measures/structure.ts';
-import { planJobs } from './jobs.ts';
-import type { ExhibitJobs, PanelJob, TextJob, Where } from './jobs.ts';
-import { paramDocs } from './params.ts';
+import { planJobs } from './stages/jobs.ts';
+import type { ExhibitJobs, PanelJob, TextJob, Where } from './stages/jobs.ts';
+import { paramDocs } from './stages/param-docs.ts';
 
 export const GENERATOR = 'Vitrine 0.1.0';
 

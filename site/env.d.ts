@@ -1,6 +1,6 @@
 /// <reference types="astro/client" />
 
 declare module 'virtual:vitrine/exhibit' {
-  const exhibit: import('../pipeline/prepared.ts').PreparedExhibit;
+  const exhibit: import('../pipeline/stages/prepared.ts').PreparedExhibit;
   export default exhibit;
 }

@@ -7,7 +7,7 @@
 import type { AstroIntegration } from 'astro';
 import { resolve } from 'node:path';
 import { prepareExhibit } from '../pipeline/exhibit.ts';
-import type { PreparedExhibit } from '../pipeline/prepared.ts';
+import type { PreparedExhibit } from '../pipeline/stages/prepared.ts';
 import { formatProblem } from '../pipeline/problems/problem.ts';
 
 const MODULE_ID = 'virtual:vitrine/exhibit';

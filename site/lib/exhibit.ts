@@ -1,5 +1,5 @@
 import exhibit from 'virtual:vitrine/exhibit';
-import type { PreparedPanel } from '../../pipeline/prepared.ts';
+import type { PreparedPanel } from '../../pipeline/stages/prepared.ts';
 
 export { exhibit };
 

@@ -3,7 +3,7 @@ import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { cacheKey, ResultCache, stableJson } from '../../pipeline/cache/cache.ts';
-import { tableToCsv } from '../../pipeline/csv.ts';
+import { tableToCsv } from '../../pipeline/stages/csv.ts';
 
 const dirs: string[] = [];
 afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { speech } from '../../pipeline/measures/speech.ts';
 import { conversation, UNKNOWN_ID } from '../../pipeline/measures/conversation.ts';
 import { measures } from '../../pipeline/measures/registry.ts';
-import { tableToCsv } from '../../pipeline/csv.ts';
+import { tableToCsv } from '../../pipeline/stages/csv.ts';
 import { CAST, context } from './helpers.ts';
 
 const TEXT = [

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { paramDocs } from '../../pipeline/params.ts';
+import { paramDocs } from '../../pipeline/stages/param-docs.ts';
 import { readFileSync } from 'node:fs';
 import { emotion } from '../../pipeline/measures/emotion.ts';
 import { parseCategoryLexicon } from '../../pipeline/lexicons/categories.ts';

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { paramDocs } from '../../pipeline/params.ts';
+import { paramDocs } from '../../pipeline/stages/param-docs.ts';
 import { readability } from '../../pipeline/measures/readability.ts';
 import { context } from './fixture.ts';
 

@@ -1,7 +1,7 @@
 import type { APIRoute, GetStaticPaths } from 'astro';
 import { exhibit } from '../../../lib/exhibit.ts';
-import { tableToCsv } from '../../../../pipeline/csv.ts';
-import type { PreparedPanel } from '../../../../pipeline/prepared.ts';
+import { tableToCsv } from '../../../../pipeline/stages/csv.ts';
+import type { PreparedPanel } from '../../../../pipeline/stages/prepared.ts';
 
 export const getStaticPaths = (() =>
   exhibit.rooms.flatMap((room) =>

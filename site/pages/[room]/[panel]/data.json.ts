@@ -1,6 +1,6 @@
 import type { APIRoute, GetStaticPaths } from 'astro';
 import { exhibit } from '../../../lib/exhibit.ts';
-import type { PreparedPanel } from '../../../../pipeline/prepared.ts';
+import type { PreparedPanel } from '../../../../pipeline/stages/prepared.ts';
 
 export const getStaticPaths = (() =>
   exhibit.rooms.flatMap((room) =>

@@ -1,4 +1,4 @@
-import type { Table } from './charts/types.ts';
+import type { Table } from '../charts/types.ts';
 
 /**
  * Characters that make a spreadsheet read a cell as a formula when they open it: `=`, `+`,

@@ -3,8 +3,8 @@
  * data. It is the one seam between the pipeline and Astro: pages read this
  * (through the `virtual:vitrine/exhibit` module) and never import measure code.
  */
-import type { MethodCard } from './measures/types.ts';
-import type { Table } from './charts/types.ts';
+import type { MethodCard } from '../measures/types.ts';
+import type { Table } from '../charts/types.ts';
 
 export interface PreparedNote {
   label: string;

@@ -1,6 +1,6 @@
-import type { Registry } from './plan/registry.ts';
-import { measures } from './measures/registry.ts';
-import { charts } from './charts/index.ts';
+import type { Registry } from '../plan/registry.ts';
+import { measures } from '../measures/registry.ts';
+import { charts } from '../charts/index.ts';
 
 /** The plan's view of what measures and charts exist, built from the real ones. */
 export function planRegistry(): Registry {

@@ -6,12 +6,12 @@
  */
 import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
-import { decodeText } from './text/decode.ts';
-import { buildTextModel } from './text/build.ts';
-import { findMentions } from './text/mentions.ts';
-import type { CastMember, Mentions, TextModel, TextOptions } from './text/model.ts';
-import type { Problem } from './problems/problem.ts';
-import { stableJson } from './cache/cache.ts';
+import { decodeText } from '../text/decode.ts';
+import { buildTextModel } from '../text/build.ts';
+import { findMentions } from '../text/mentions.ts';
+import type { CastMember, Mentions, TextModel, TextOptions } from '../text/model.ts';
+import type { Problem } from '../problems/problem.ts';
+import { stableJson } from '../cache/cache.ts';
 
 export interface OpenedText {
   model: TextModel;

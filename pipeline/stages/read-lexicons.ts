@@ -4,9 +4,9 @@
  */
 import { readFileSync } from 'node:fs';
 import type { LexiconJob } from './jobs.ts';
-import type { WordCategories } from './measures/types.ts';
-import type { Problem } from './problems/problem.ts';
-import { parseCategoryLexicon } from './lexicons/categories.ts';
+import type { WordCategories } from '../measures/types.ts';
+import type { Problem } from '../problems/problem.ts';
+import { parseCategoryLexicon } from '../lexicons/categories.ts';
 
 export function readLexicons(jobs: LexiconJob[], problems: Problem[]): Record<string, WordCategories> {
   const out: Record<string, WordCategories> = {};

@@ -3,8 +3,8 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
-import { BUILD_MARKER, checkOutputFolder, cleanStaleBuilds, markBuild, processAlive, swapInto } from '../pipeline/output.ts';
-import type { Protected } from '../pipeline/output.ts';
+import { BUILD_MARKER, checkOutputFolder, cleanStaleBuilds, markBuild, processAlive, swapInto } from '../../pipeline/stages/output.ts';
+import type { Protected } from '../../pipeline/stages/output.ts';
 
 const dirs: string[] = [];
 afterAll(() => dirs.forEach((d) => rmSync(d, { recursive: true, force: true })));

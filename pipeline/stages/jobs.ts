@@ -3,9 +3,9 @@
  * read with which options, and which panels to measure and draw.
  */
 import { relative } from 'node:path';
-import type { Plan, Where } from './plan/types.ts';
-import type { CastMember, TextOptions } from './text/model.ts';
-import type { DialogueSettings } from './measures/types.ts';
+import type { Plan, Where } from '../plan/types.ts';
+import type { CastMember, TextOptions } from '../text/model.ts';
+import type { DialogueSettings } from '../measures/types.ts';
 
 export type { Where };
 

@@ -11,8 +11,8 @@
  */
 import { cpSync, existsSync, lstatSync, mkdirSync, readdirSync, readFileSync, realpathSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { basename, dirname, join, relative, resolve, sep } from 'node:path';
-import type { Problem } from './problems.ts';
-import { displayPath } from './plan/files.ts';
+import type { Problem } from '../problems/problem.ts';
+import { displayPath } from '../plan/files.ts';
 
 /** Name of the marker file every build leaves at the top of its output folder. */
 export const BUILD_MARKER = '.vitrine-build';
