@@ -5,7 +5,7 @@ import { pmi } from '../stats/pmi.ts';
 import { tScore } from '../stats/tscore.ts';
 import { logDice } from '../stats/logdice.ts';
 import { findSequence } from '../stats/sequence.ts';
-import { hasStopwords, stopwords } from './stopwords.ts';
+import { hasStopwords, stopwords } from '../text/stopwords.ts';
 import { phraseTypes, phraseWords } from './concordance.ts';
 
 const SORT_KEYS = ['logDice', 'pmi', 'tScore', 'frequency'] as const;

@@ -6,8 +6,8 @@ import { griesDP, griesDPnorm } from '../stats/dp.ts';
 import { juillandD } from '../stats/juilland.ts';
 import { entropyD2 } from '../stats/entropy-d2.ts';
 import { findSequence } from '../stats/sequence.ts';
-import { hasStopwords, stopwords } from './stopwords.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { hasStopwords, stopwords } from '../text/stopwords.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { segmentBounds, segmentOf } from './presence.ts';
 import { phraseTypes } from './concordance.ts';
 

@@ -3,7 +3,7 @@ import type { Measure } from './types.ts';
 import type { BarsData, LinesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { TOKEN_FLAGS } from '../text/model.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { countTypes, mattr, mtld } from '../stats/diversity.ts';
 import { positionRanges } from '../stats/windows.ts';
 

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Measure, WordCategories } from './types.ts';
 import type { BarsData, LinesData, MultiplesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { equalSegments } from '../stats/windows.ts';
 
 export const emotionParams = z

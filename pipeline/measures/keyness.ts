@@ -6,8 +6,8 @@ import { keyness as compareCounts } from '../stats/keyness.ts';
 import type { KeynessRow } from '../stats/keyness.ts';
 import { criticalValue } from '../stats/chisquare.ts';
 import type { SignificanceBand } from '../stats/chisquare.ts';
-import { hasStopwords, stopwords } from './stopwords.ts';
-import { chapterTick } from './labels.ts';
+import { hasStopwords, stopwords } from '../text/stopwords.ts';
+import { chapterTick } from '../text/labels.ts';
 
 export const keynessParams = z
   .object({

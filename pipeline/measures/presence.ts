@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData, StripData } from '../charts/types.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 
 export const presenceParams = z
   .object({

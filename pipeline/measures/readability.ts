@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { syllablesPerType } from '../stats/syllables.ts';
 import { fleschKincaidGrade, fleschReadingEase, lengthHistogram, nearestRank } from '../stats/readability.ts';
 import { positionRanges, rangeOf } from '../stats/windows.ts';

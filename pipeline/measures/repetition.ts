@@ -3,7 +3,7 @@ import type { Measure, MeasureContext } from './types.ts';
 import type { BarsData, KwicData, TextmapData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { TOKEN_FLAGS } from '../text/model.ts';
-import { hasStopwords, stopwords } from './stopwords.ts';
+import { hasStopwords, stopwords } from '../text/stopwords.ts';
 import { requireEnglish } from '../nlp/english.ts';
 import { tagModel } from '../nlp/tag.ts';
 import { speakerOfTokens } from './frequency.ts';

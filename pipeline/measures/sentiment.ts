@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData, Table, TextmapData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
-import { chapterTick, segmentLabel } from './labels.ts';
+import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { AFINN_CREDIT, afinnLexicon } from '../lexicons/afinn.ts';
 import { DEFAULT_NEGATORS, scoreTokens, type TokenScores } from '../stats/valence.ts';
 import { equalSegments, meanAndSd, prefixSums, windowStarts } from '../stats/windows.ts';

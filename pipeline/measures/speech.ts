@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData } from '../charts/types.ts';
-import { chapterTick } from './labels.ts';
+import { chapterTick } from '../text/labels.ts';
 import { analyseDialogue, MIN_CONFIDENCE, type Rule } from '../dialogue/attribute.ts';
 import type { QuoteProblem } from '../dialogue/quotes.ts';
 

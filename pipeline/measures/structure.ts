@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData } from '../charts/types.ts';
-import { chapterTick } from './labels.ts';
+import { chapterTick } from '../text/labels.ts';
 
 export const structureParams = z
   .object({

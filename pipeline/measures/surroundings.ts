@@ -3,7 +3,7 @@ import type { Measure, MeasureContext } from './types.ts';
 import type { BarsData, MultiplesData, ScatterData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { TOKEN_FLAGS } from '../text/model.ts';
-import { stopwords } from './stopwords.ts';
+import { stopwords } from '../text/stopwords.ts';
 import { logLikelihood } from '../stats/loglikelihood.ts';
 import { AFINN_CREDIT, afinnLexicon } from '../lexicons/afinn.ts';
 import { speechVerbs } from '../dialogue/verbs.ts';

@@ -13,7 +13,7 @@ import {
   type Phrase,
 } from '../../pipeline/measures/repetition.ts';
 import { gapHasher, tupleHash, tupleTable } from '../../pipeline/measures/repetition/tuples.ts';
-import { stopwords } from '../../pipeline/measures/stopwords.ts';
+import { stopwords } from '../../pipeline/text/stopwords.ts';
 import { TOKEN_FLAGS, type CastMember, type TextModel } from '../../pipeline/text/model.ts';
 import { context } from './fixture.ts';
 
