@@ -209,18 +209,8 @@ export const planSchema = z
   })
   .describe('An exhibit plan: "version: 1", then the exhibit, texts, cast (optional) and rooms sections.');
 
-/** The plan as a curator may write it (defaults not yet filled). */
-export type PlanInput = z.input<typeof planSchema>;
 /** The plan as validated by the schema: defaults filled, paths still as written. */
 export type PlanData = z.output<typeof planSchema>;
-export type ExhibitData = z.output<typeof exhibitSchema>;
-export type TextData = z.output<typeof textSchema>;
-export type CastMemberData = z.output<typeof castMemberSchema>;
 export type Pronoun = z.output<typeof pronounSchema>;
 export type NoteAnchor = z.output<typeof noteAnchorSchema>;
-export type NoteData = z.output<typeof noteSchema>;
-export type PanelData = z.output<typeof panelSchema>;
-export type RoomData = z.output<typeof roomSchema>;
-export type PinData = z.output<typeof pinSchema>;
 export type DialogueData = z.output<typeof dialogueSchema>;
-export type LexiconData = z.output<typeof lexiconSchema>;
