@@ -16,14 +16,13 @@ import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
 import { z } from 'zod';
-import { prepareExhibit, sortProblems, GENERATOR } from './exhibit.ts';
+import { prepareExhibit, GENERATOR } from './exhibit.ts';
 import type { PrepareResult } from './exhibit.ts';
-import { formatProblem, hasErrors } from './problems/problem.ts';
+import { formatProblem, hasErrors, problem, sortProblems } from './problems/problem.ts';
 import type { Problem } from './problems/problem.ts';
 import { measures } from './measures/registry.ts';
 import { tableToCsv } from './stages/csv.ts';
 import { readText } from './stages/read-text.ts';
-import { ResultCache } from './cache/cache.ts';
 import { castMemberSchema } from './plan/schema.ts';
 import type { CastMember } from './text/model.ts';
 import { nearest } from './plan/suggest.ts';
@@ -252,10 +251,10 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
   const parsed = m.params.safeParse(raw);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
-      problems.push({ severity: 'error', code: 'cli/param', path: `--param ${issue.path.join('.') || '(params)'}`, message: issue.message });
+      problems.push(problem('cli/param', { detail: issue.message }, { path: `--param ${issue.path.join('.') || '(params)'}` }));
     }
   }
-  if (m.needsCast && !values.cast) problems.push({ severity: 'error', code: 'cli/needs-cast', message: `the measure "${name}" needs a cast`, hint: 'pass --cast CAST.yaml (a YAML list of { id, name, aliases, pronoun })' });
+  if (m.needsCast && !values.cast) problems.push(problem('cli/needs-cast', { measure: name }));
   const file = resolve(values.text!);
   const read = readText(file, values.text!, { id: 'text' }, cast);
   problems.push(...read.problems);
@@ -263,7 +262,6 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
     report(problems, io);
     return EXIT.problems;
   }
-  const cache = new ResultCache(cacheDir(values));
   const language = values.language ?? 'en';
   let result: unknown;
   try {
@@ -272,7 +270,6 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
     io.err(`${values.text}: the measure "${name}" cannot run with these parameters: ${(e as Error).message}\n`);
     return EXIT.problems;
   }
-  void cache;
   io.out(format === 'csv' ? tableToCsv(m.table(result, parsed.data)) : JSON.stringify(result, null, 2) + '\n');
   return EXIT.ok;
 }
@@ -303,13 +300,13 @@ function readCast(file: string, problems: Problem[]): CastMember[] {
   try {
     data = parseYaml(readFileSync(file, 'utf8'));
   } catch (e) {
-    problems.push({ severity: 'error', code: 'cast/unreadable', file, message: `the cast file cannot be read: ${(e as Error).message}` });
+    problems.push(problem('cast/unreadable', { reason: (e as Error).message }, { file }));
     return [];
   }
   const parsed = z.array(castMemberSchema).safeParse(data);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
-      problems.push({ severity: 'error', code: 'cast/invalid', file, path: formatPath(issue.path), message: issue.message, hint: 'the cast file is a YAML list of { id, name, aliases, pronoun }' });
+      problems.push(problem('cast/invalid', { detail: issue.message }, { file, path: formatPath(issue.path) }));
     }
     return [];
   }

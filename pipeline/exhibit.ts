@@ -15,8 +15,9 @@ import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 
 import { loadPlan } from './plan/load.ts';
-import type { Problem } from './problems/problem.ts';
-import { hasErrors } from './problems/problem.ts';
+import type { Problem, ProblemPlace } from './problems/problem.ts';
+import { hasErrors, problem, sortProblems } from './problems/problem.ts';
+import type { ProblemArgs, ProblemCode } from './problems/catalogue.ts';
 import { planRegistry } from './stages/registry.ts';
 import { measures } from './measures/registry.ts';
 import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
@@ -36,6 +37,13 @@ import type { ExhibitJobs, PanelJob, TextJob, Where } from './stages/jobs.ts';
 import { paramDocs } from './stages/param-docs.ts';
 
 export const GENERATOR = 'Vitrine 0.1.0';
+
+const PIN_CODES = {
+  'no-match': 'dialogue/pin-no-match',
+  several: 'dialogue/pin-several',
+  'unknown-speaker': 'dialogue/pin-unknown-speaker',
+  'unknown-addressee': 'dialogue/pin-unknown-addressee',
+} as const;
 
 export interface PrepareOptions {
   /** Folder for cached measure results; null keeps nothing on disk. */
@@ -117,7 +125,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     for (const p of room.panels) {
       const named = p.params.lexicon;
       if (typeof named === 'string' && !lexicons[named] && !jobs.lexicons.some((l) => l.id === named)) {
-        problems.push(atWhere({ ...p.where, path: `${p.where.path}.params.lexicon` }, 'plan/unknown-lexicon', `unknown word list "${named}"`, jobs.lexicons.length ? `the plan's word lists are: ${jobs.lexicons.map((l) => l.id).join(', ')}` : 'add a "lexicons:" list naming the file (id and file)'));
+        problems.push(atWhere({ ...p.where, path: `${p.where.path}.params.lexicon` }, 'plan/unknown-lexicon', { name: named, ids: jobs.lexicons.map((l) => l.id) }));
       }
     }
   }
@@ -125,10 +133,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   for (const s of states.values()) {
     if (s.job.dialogue.pins.length === 0) continue;
     for (const p of checkPins(s.read.open().model, s.job.dialogue, jobs.cast)) {
-      problems.push({
-        ...atWhere({ ...s.job.where, path: `${s.job.where.path}.dialogue.pins[${p.pin}]` }, `dialogue/pin-${p.reason}`, p.message),
-        severity: p.reason === 'several' ? 'warning' : 'error',
-      });
+      problems.push(atWhere({ ...s.job.where, path: `${s.job.where.path}.dialogue.pins[${p.pin}]` }, PIN_CODES[p.reason], { detail: p.message }));
     }
   }
   if (hasErrors(problems)) return empty();
@@ -260,7 +265,7 @@ function preparePanel(
       lexicons,
     });
   } catch (e) {
-    problems.push(atWhere(job.measureWhere, 'panel/measure-failed', `the measure "${job.measure}" cannot run with these parameters: ${(e as Error).message}`, 'change the parameters of this panel'));
+    problems.push(atWhere(job.measureWhere, 'panel/measure-failed', { measure: job.measure, reason: (e as Error).message }));
     return null;
   }
   const data = m.views[job.chart]!(result, job.params);
@@ -271,7 +276,7 @@ function preparePanel(
     const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
     const resolved = resolveNote(n.at, data, state.structure, jobs.cast, segments);
     if ('problem' in resolved) {
-      problems.push(atWhere(n.where, 'note/unresolved', resolved.problem, resolved.hint));
+      problems.push(atWhere(n.where, 'note/unresolved', { detail: resolved.problem, hint: resolved.hint }));
       return;
     }
     notes.push({ label, text: n.text, at: resolved.at });
@@ -287,7 +292,7 @@ function preparePanel(
   );
   for (const label of out.skippedNotes ?? []) {
     const n = byLabel.get(label);
-    if (n) problems.push({ ...atWhere(n.where, 'note/not-drawn', 'the note could not be placed on the chart, so it is shown only beside it', 'point it at something the chart draws'), severity: 'warning' });
+    if (n) problems.push(atWhere(n.where, 'note/not-drawn', {}));
   }
   return {
     computed: cache.stats.misses > misses,
@@ -440,8 +445,9 @@ function placeInText(word: string, data: ChartData): PinnedNote['at'] | null {
   return null;
 }
 
-function atWhere(where: Where, code: string, message: string, hint?: string): Problem {
-  return { severity: 'error', code, file: where.file, line: where.line, column: where.column, path: where.path, message, hint };
+function atWhere<C extends ProblemCode>(where: Where, code: C, args: ProblemArgs<C>): Problem {
+  const place: ProblemPlace = { file: where.file, line: where.line, column: where.column, path: where.path };
+  return problem(code, args, place);
 }
 
 function citation(jobs: ExhibitJobs, p: PreparedPanel, texts: PreparedText[], buildHash: string): string {
@@ -462,23 +468,20 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
     cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
     ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
     warnings: [
-      ...model.warnings.map((w) => ({
-        severity: 'warning' as const,
+      ...model.warnings.map((w): Problem => ({
+        severity: 'warning',
         code: w.code,
         file: s.job.display,
-        line: w.line,
-        column: w.column,
+        ...(w.line !== undefined ? { line: w.line } : {}),
+        ...(w.column !== undefined ? { column: w.column } : {}),
         message: w.message,
+        ...(w.hint !== undefined ? { hint: w.hint } : {}),
       })),
       // Unbalanced quotation marks: the rest of the text is still read.
       ...(cast.length
-        ? findQuotes(model, s.job.dialogue.verbs).problems.map((q) => ({
-            severity: 'warning' as const,
-            code: 'dialogue/unbalanced',
-            file: s.job.display,
-            line: q.line,
-            message: `chapter ${q.chapter}, paragraph ${q.paragraph}: ${q.message}`,
-          }))
+        ? findQuotes(model, s.job.dialogue.verbs).problems.map((q) =>
+            problem('dialogue/unbalanced', { chapter: q.chapter, paragraph: q.paragraph, detail: q.message }, { file: s.job.display, line: q.line }),
+          )
         : []),
     ],
   };
@@ -490,10 +493,5 @@ function hashOf(parts: (string | Uint8Array)[]): string {
   return h.digest('hex').slice(0, 12);
 }
 
-export function sortProblems(problems: Problem[]): Problem[] {
-  return [...problems].sort(
-    (a, b) => (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0),
-  );
-}
 
 

@@ -5,6 +5,7 @@
 import type { PathSegment } from './source.ts';
 import { asList, asRecord, asText, idsOf, panelsOf } from './raw.ts';
 import type { RawRecord, Reporter } from './raw.ts';
+import { wording } from '../problems/problem.ts';
 
 interface Entry {
   id: string;
@@ -20,11 +21,7 @@ function reportDuplicates(entries: Entry[], label: string, r: Reporter): void {
       continue;
     }
     const line = r.source.at(earlier.path).line;
-    r.report(entry.path, {
-      code: 'plan/duplicate-id',
-      message: `the ${label} id "${entry.id}" is used more than once`,
-      hint: `it is first used on line ${line}; give each ${label} its own id`,
-    });
+    r.report(entry.path, wording('plan/duplicate-id', { label, id: entry.id, line }));
   }
 }
 
@@ -70,15 +67,7 @@ export function checkSharedNames(plan: RawRecord, r: Reporter): void {
       }
       if (first.member === member || warned.has(`${key}\u0000${member}`)) continue;
       warned.add(`${key}\u0000${member}`);
-      r.report(
-        path,
-        {
-          code: 'plan/shared-alias',
-          message: `the name "${key}" is given to both "${first.id}" and "${id}"`,
-          hint: 'where it appears in the text it will be counted as ambiguous, not given to either; remove it from one of them if it means one character',
-        },
-        'warning',
-      );
+      r.report(path, wording('plan/shared-alias', { name: key, first: first.id, second: id }), 'warning');
     }
   });
 }

@@ -13,6 +13,7 @@ import { registryNames } from './registry.ts';
 import { allowedKeys, dropsUnknownKeys } from './schema-walk.ts';
 import type { PathSegment } from './source.ts';
 import { suggestionHint } from './suggest.ts';
+import { wording } from '../problems/problem.ts';
 
 /** Parsed params and options of each panel, keyed by `${room}/${panel}` indices. */
 export interface PanelSettings {
@@ -46,11 +47,7 @@ function checkSettings(s: Settings, r: Reporter): { ok: boolean; output?: unknow
     for (const key of Object.keys(value as object)) {
       if (allowed.includes(key)) continue;
       ok = false;
-      r.reportKey(s.path, key, {
-        code: s.unknownKey.code,
-        message: s.unknownKey.message(key),
-        hint: suggestionHint(key, allowed, s.unknownKey.plural),
-      });
+      r.reportKey(s.path, key, s.unknownKey.word(key, suggestionHint(key, allowed, s.unknownKey.plural)));
     }
   }
   const parsed = s.schema.safeParse(value);
@@ -77,6 +74,7 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
   const hasCast = asList(plan.cast).length > 0;
   const measureNames = registryNames(registry.measures);
   const chartNames = registryNames(registry.charts);
+  const castHint = (id: string) => (hasCast ? suggestionHint(id, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters');
 
   for (const { panel, room, index, path } of panelsOf(plan)) {
     const key = panelKey(room, index);
@@ -85,36 +83,20 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
     const text = panel.text;
     if (text === undefined) {
       if (textIds.length > 1) {
-        r.report([...path, 'text'], {
-          code: 'plan/missing-text',
-          message: 'the panel does not say which text it reads, and the plan has several',
-          hint: `add "text:" with one of: ${quoted(textIds)}`,
-        });
+        r.report([...path, 'text'], wording('plan/missing-text', { ids: quoted(textIds) }));
       }
     } else if (asText(text) !== undefined && !textIds.includes(text as string)) {
-      r.report([...path, 'text'], {
-        code: 'plan/unknown-text',
-        message: `unknown text "${text as string}"`,
-        hint: suggestionHint(text as string, textIds, 'text ids'),
-      });
+      r.report([...path, 'text'], wording('plan/unknown-text', { text: text as string, hint: suggestionHint(text as string, textIds, 'text ids') }));
     }
 
     // The measure and its params.
     const measureName = asText(panel.measure);
     const measure = measureName !== undefined && Object.hasOwn(registry.measures, measureName) ? registry.measures[measureName] : undefined;
     if (measureName !== undefined && measure === undefined) {
-      r.report([...path, 'measure'], {
-        code: 'plan/unknown-measure',
-        message: `unknown measure "${measureName}"`,
-        hint: suggestionHint(measureName, measureNames, 'measures'),
-      });
+      r.report([...path, 'measure'], wording('plan/unknown-measure', { measure: measureName, hint: suggestionHint(measureName, measureNames, 'measures') }));
     }
     if (measure !== undefined && measure.needsCast && !hasCast) {
-      r.report([...path, 'measure'], {
-        code: 'plan/needs-cast',
-        message: `the measure "${measureName}" needs a cast, and the plan has none`,
-        hint: 'add a "cast:" list naming the characters (id and name of each)',
-      });
+      r.report([...path, 'measure'], wording('plan/needs-cast', { measure: measureName! }));
     }
     if (measure !== undefined) {
       const done = checkSettings(
@@ -123,8 +105,7 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
           value: panel.params,
           path: [...path, 'params'],
           unknownKey: {
-            code: 'plan/unknown-param',
-            message: (k) => `unknown parameter "${k}" for measure "${measureName}"`,
+            word: (key, hint) => wording('plan/unknown-param', { key, measure: measureName!, hint }),
             plural: `parameters of "${measureName}"`,
           },
         },
@@ -139,21 +120,19 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
     if (chartName !== undefined && chart === undefined) {
       const supported = measure?.charts ?? [];
       const near = suggestionHint(chartName, supported, 'charts');
-      r.report([...path, 'chart'], {
-        code: 'plan/unknown-chart',
-        message: `unknown chart "${chartName}"`,
-        hint: near.startsWith('did you mean')
-          ? near
-          : measure !== undefined
-            ? `"${measureName}" can be drawn as: ${quoted(supported)}`
-            : suggestionHint(chartName, chartNames, 'charts'),
-      });
+      r.report(
+        [...path, 'chart'],
+        wording('plan/unknown-chart', {
+          chart: chartName,
+          hint: near.startsWith('did you mean')
+            ? near
+            : measure !== undefined
+              ? `"${measureName}" can be drawn as: ${quoted(supported)}`
+              : suggestionHint(chartName, chartNames, 'charts'),
+        }),
+      );
     } else if (chartName !== undefined && measure !== undefined && !measure.charts.includes(chartName)) {
-      r.report([...path, 'chart'], {
-        code: 'plan/chart-not-supported',
-        message: `the measure "${measureName}" cannot be drawn as "${chartName}"`,
-        hint: measure.charts.length > 0 ? `it can be drawn as: ${quoted(measure.charts)}` : 'it names no chart it can be drawn as',
-      });
+      r.report([...path, 'chart'], wording('plan/chart-not-supported', { measure: measureName!, chart: chartName, charts: quoted(measure.charts) }));
     }
     if (chart !== undefined) {
       const done = checkSettings(
@@ -162,8 +141,7 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
           value: panel.options,
           path: [...path, 'options'],
           unknownKey: {
-            code: 'plan/unknown-option',
-            message: (k) => `unknown option "${k}" for chart "${chartName}"`,
+            word: (key, hint) => wording('plan/unknown-option', { key, chart: chartName!, hint }),
             plural: `options of "${chartName}"`,
           },
         },
@@ -176,11 +154,7 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
     asList(panel.notes).forEach((note, n) => {
       const character = asText(asRecord(asRecord(note)?.at)?.character);
       if (character === undefined || castIds.includes(character)) return;
-      r.report([...path, 'notes', n, 'at', 'character'], {
-        code: 'plan/unknown-cast',
-        message: `unknown cast member "${character}"`,
-        hint: hasCast ? suggestionHint(character, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters',
-      });
+      r.report([...path, 'notes', n, 'at', 'character'], wording('plan/unknown-cast', { id: character, hint: castHint(character) }));
     });
   }
   // Speakers and addressees named by dialogue pins.
@@ -189,11 +163,7 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
       for (const key of ['speaker', 'addressee']) {
         const id = asText(asRecord(pin)?.[key]);
         if (id === undefined || castIds.includes(id)) continue;
-        r.report(['texts', ti, 'dialogue', 'pins', pi, key], {
-          code: 'plan/unknown-cast',
-          message: `unknown cast member "${id}"`,
-          hint: hasCast ? suggestionHint(id, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters',
-        });
+        r.report(['texts', ti, 'dialogue', 'pins', pi, key], wording('plan/unknown-cast', { id, hint: castHint(id) }));
       }
     });
   });

@@ -5,6 +5,7 @@
 import { realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
 import type { Wording } from './raw.ts';
+import { wording } from '../problems/problem.ts';
 
 export interface FileCheckResult {
   /** Absolute path, set when the path stays inside the exhibit folder. */
@@ -43,53 +44,37 @@ const MDX_EXTENSIONS = ['.mdx', '.md'];
  * `realDir` its real path (symbolic links resolved), `shownDir` how to name it.
  */
 export async function checkFile(written: string, rule: FileRule, dir: string, realDir: string, shownDir: string): Promise<FileCheckResult> {
-  const stayInside = `paths must stay inside the exhibit folder (${shownDir}); move the file into it and write the path relative to it`;
+  const what = rule.what;
   if (looksAbsolute(written)) {
-    return { problems: [{ code: 'plan/path-outside', message: `the ${rule.what} path "${written}" is absolute`, hint: stayInside }] };
+    return { problems: [wording('plan/path-outside', { what, written, dir: shownDir, how: 'absolute' })] };
   }
   const absolute = path.resolve(dir, written);
   if (absolute === dir) {
-    return { problems: [{ code: 'plan/not-a-file', message: `the ${rule.what} path "${written}" names the exhibit folder itself`, hint: 'name a file inside it' }] };
+    return { problems: [wording('plan/not-a-file', { what, written, folder: 'exhibit' })] };
   }
   if (!isInside(dir, absolute)) {
-    return { problems: [{ code: 'plan/path-outside', message: `the ${rule.what} path "${written}" leads outside the exhibit folder`, hint: stayInside }] };
+    return { problems: [wording('plan/path-outside', { what, written, dir: shownDir, how: 'outside' })] };
   }
 
   const problems: Wording[] = [];
   if (rule.mdx && !MDX_EXTENSIONS.includes(path.extname(written).toLowerCase())) {
-    problems.push({
-      code: 'plan/not-mdx',
-      message: `the ${rule.what} "${written}" is not an MDX file`,
-      hint: 'name a file ending in .mdx (or .md for plain Markdown)',
-    });
+    problems.push(wording('plan/not-mdx', { what, written }));
   }
 
   let real: string;
   try {
     real = await realpath(absolute);
   } catch {
-    problems.push({
-      code: 'plan/missing-file',
-      message: `the ${rule.what} file "${written}" does not exist`,
-      hint: `looked for ${path.join(shownDir, written).split(path.sep).join('/')}; create it or correct the path`,
-    });
+    problems.push(wording('plan/missing-file', { what, written, looked: path.join(shownDir, written).split(path.sep).join('/') }));
     return { absolute, problems };
   }
   if (!isInside(realDir, real)) {
-    problems.push({
-      code: 'plan/path-outside',
-      message: `the ${rule.what} path "${written}" leads outside the exhibit folder through a symbolic link`,
-      hint: `${stayInside} (copy it rather than link to it)`,
-    });
+    problems.push(wording('plan/path-outside', { what, written, dir: shownDir, how: 'link' }));
     return { problems };
   }
   const info = await stat(real);
   if (!info.isFile()) {
-    problems.push({
-      code: 'plan/not-a-file',
-      message: `the ${rule.what} path "${written}" is a folder, not a file`,
-      hint: 'name a file inside it',
-    });
+    problems.push(wording('plan/not-a-file', { what, written, folder: 'other' }));
   }
   return { absolute, problems };
 }

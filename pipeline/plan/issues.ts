@@ -5,6 +5,8 @@
  */
 import type { z } from 'zod';
 import type { Problem } from '../problems/problem.ts';
+import { wording } from '../problems/problem.ts';
+import type { Wording } from './raw.ts';
 import { allowedKeys, descriptionOf, schemaAt } from './schema-walk.ts';
 import { formatPath } from './source.ts';
 import type { PathSegment, PlanSource } from './source.ts';
@@ -13,9 +15,8 @@ import { nearest, suggestionHint } from './suggest.ts';
 type Issue = z.core.$ZodIssue;
 
 export interface UnknownKeyWording {
-  code: string;
-  /** E.g. (key) => `unknown option "${key}" for chart "bars"`. */
-  message: (key: string) => string;
+  /** The problem for an unknown key, given the suggestion hint; e.g. (key, hint) => wording('plan/unknown-option', { key, chart: 'bars', hint }). */
+  word: (key: string, hint: string) => Wording;
   /** E.g. `options of "bars"`, as in "the options of "bars" are: …". */
   plural: string;
 }
@@ -83,12 +84,6 @@ function listValues(values: readonly unknown[]): string {
   return values.map((v) => JSON.stringify(v)).join(', ');
 }
 
-interface Wording {
-  code: string;
-  message: string;
-  hint?: string;
-}
-
 /** Words one issue; `about` is the description of the field, used as the hint when nothing better is known. */
 function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wording {
   switch (issue.code) {
@@ -96,11 +91,7 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
       const expected = EXPECTED[issue.expected] ?? issue.expected;
       if (value === undefined) {
         const key = lastKey(issue.path as PathSegment[]);
-        return {
-          code: 'plan/missing-key',
-          message: `"${key}" is missing`,
-          hint: about ? `add "${key}:" here (${about})` : `add "${key}:" here`,
-        };
+        return wording('plan/missing-key', { key, about });
       }
       let hint = about;
       if (value === null) {
@@ -110,67 +101,59 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
       } else if (issue.expected === 'int' && typeof value === 'number') {
         hint = 'use a whole number';
       }
-      return { code: 'plan/wrong-type', message: `expected ${expected}, found ${describeValue(value)}`, hint };
+      return wording('plan/wrong-type', { expected, found: describeValue(value), hint });
     }
     case 'invalid_value': {
       const values = issue.values;
       if (values.length === 1) {
-        return { code: 'plan/invalid-value', message: `must be ${JSON.stringify(values[0])}, found ${describeValue(value)}`, hint: about };
+        return wording('plan/invalid-value', { detail: `must be ${JSON.stringify(values[0])}, found ${describeValue(value)}`, hint: about });
       }
       const close = typeof value === 'string' ? nearest(value, values.filter((v): v is string => typeof v === 'string')) : undefined;
-      return {
-        code: 'plan/invalid-value',
-        message: `${describeValue(value)} is not one of the accepted values`,
+      return wording('plan/invalid-value', {
+        detail: `${describeValue(value)} is not one of the accepted values`,
         hint: close !== undefined ? `did you mean "${close}"? (accepted: ${listValues(values)})` : `accepted: ${listValues(values)}`,
-      };
+      });
     }
     case 'too_small': {
       const min = Number(issue.minimum);
       if (issue.origin === 'array' || issue.origin === 'set') {
-        return { code: 'plan/too-few', message: `the list needs at least ${min} ${min === 1 ? 'entry' : 'entries'}`, hint: about };
+        return wording('plan/too-few', { min, hint: about });
       }
       if (issue.origin === 'string') {
-        return min <= 1
-          ? { code: 'plan/empty', message: 'the value is empty', hint: about ?? 'write a value, or remove the line' }
-          : { code: 'plan/too-short', message: `the text must be at least ${min} characters long`, hint: about };
+        return min <= 1 ? wording('plan/empty', { what: 'value', hint: about }) : wording('plan/too-short', { min, hint: about });
       }
       const bound = issue.inclusive ? `${min} or more` : `more than ${min}`;
-      return { code: 'plan/too-small', message: `must be ${bound}, found ${describeValue(value)}`, hint: about };
+      return wording('plan/too-small', { bound, found: describeValue(value), hint: about });
     }
     case 'too_big': {
       const max = Number(issue.maximum);
       if (issue.origin === 'array' || issue.origin === 'set') {
-        return { code: 'plan/too-many', message: `the list may have at most ${max} ${max === 1 ? 'entry' : 'entries'}`, hint: about };
+        return wording('plan/too-many', { max, hint: about });
       }
       if (issue.origin === 'string') {
-        return { code: 'plan/too-long', message: `the text may be at most ${max} characters long`, hint: about };
+        return wording('plan/too-long', { max, hint: about });
       }
       const bound = issue.inclusive ? `${max} or less` : `less than ${max}`;
-      return { code: 'plan/too-big', message: `must be ${bound}, found ${describeValue(value)}`, hint: about };
+      return wording('plan/too-big', { bound, found: describeValue(value), hint: about });
     }
     case 'not_multiple_of':
-      return { code: 'plan/invalid-value', message: `must be a multiple of ${String(issue.divisor)}, found ${describeValue(value)}`, hint: about };
+      return wording('plan/invalid-value', { detail: `must be a multiple of ${String(issue.divisor)}, found ${describeValue(value)}`, hint: about });
     case 'invalid_format': {
       // Messages set in a schema are kept; zod's own generic ones are reworded.
       const own = !issue.message.startsWith('Invalid');
-      return {
-        code: 'plan/bad-format',
-        message: own ? issue.message : `${describeValue(value)} is not in the expected form (${issue.pattern ?? issue.format})`,
+      return wording('plan/bad-format', {
+        detail: own ? issue.message : `${describeValue(value)} is not in the expected form (${issue.pattern ?? issue.format})`,
         hint: about,
-      };
+      });
     }
     case 'custom': {
-      const params = (issue.params ?? {}) as { hint?: unknown; code?: unknown };
-      return {
-        code: typeof params.code === 'string' ? params.code : 'plan/invalid',
-        message: issue.message,
-        hint: typeof params.hint === 'string' ? params.hint : about,
-      };
+      const params = (issue.params ?? {}) as { hint?: unknown };
+      return wording('plan/invalid', { detail: issue.message, hint: typeof params.hint === 'string' ? params.hint : about });
     }
     case 'invalid_union':
-      return { code: 'plan/invalid', message: `${describeValue(value)} matches none of the accepted forms`, hint: about };
+      return wording('plan/invalid', { detail: `${describeValue(value)} matches none of the accepted forms`, hint: about });
     default:
-      return { code: 'plan/invalid', message: issue.message, hint: about };
+      return wording('plan/invalid', { detail: issue.message, hint: about });
   }
 }
 
@@ -191,11 +174,7 @@ export function issueProblems(issues: readonly Issue[], ctx: IssueContext): Prob
       for (const key of issue.keys) {
         const pos = ctx.source.keyAt(path, key);
         out.push(
-          problem(ctx, [...path, key], pos.line, pos.column, {
-            code: ctx.unknownKey.code,
-            message: ctx.unknownKey.message(key),
-            hint: suggestionHint(key, allowed, ctx.unknownKey.plural),
-          }),
+          problem(ctx, [...path, key], pos.line, pos.column, ctx.unknownKey.word(key, suggestionHint(key, allowed, ctx.unknownKey.plural))),
         );
       }
       continue;

@@ -7,7 +7,7 @@
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { Problem } from '../problems/problem.ts';
-import { hasErrors } from '../problems/problem.ts';
+import { hasErrors, problem, sortProblems, wording } from '../problems/problem.ts';
 import { checkFiles } from './check-files.ts';
 import { checkSharedNames, checkUniqueIds } from './check-ids.ts';
 import { checkPanels } from './check-panels.ts';
@@ -21,11 +21,6 @@ import { readPlanSource } from './source.ts';
 import type { LoadOptions, PlanResult } from './types.ts';
 
 export type { LoadOptions, Plan, PlanResult } from './types.ts';
-
-/** Problems in reading order: by line, then column; problems about the whole file first. */
-export function sortProblems(problems: readonly Problem[]): Problem[] {
-  return [...problems].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
-}
 
 function reason(error: unknown): string {
   const code = (error as { code?: unknown }).code;
@@ -51,13 +46,7 @@ export async function loadPlan(planPath: string, registry: Registry, opts: LoadO
     text = await readFile(file, 'utf8');
   } catch (error) {
     return done([
-      {
-        severity: 'error',
-        code: 'plan/unreadable',
-        file: shownFile,
-        message: `cannot read the exhibit plan: ${reason(error)}`,
-        hint: 'check the path given to the command; the plan is normally content/exhibit.yaml',
-      },
+      problem('plan/unreadable', { reason: reason(error) }, { file: shownFile }),
     ]);
   }
   if (text.startsWith('\uFEFF')) text = text.slice(1);
@@ -68,15 +57,7 @@ export async function loadPlan(planPath: string, registry: Registry, opts: LoadO
   if (source.data === null) {
     return done([
       ...syntax,
-      {
-        severity: 'error',
-        code: 'plan/empty',
-        file: shownFile,
-        line: 1,
-        column: 1,
-        message: 'the exhibit plan is empty',
-        hint: 'write "version: 1", then the "exhibit:", "texts:" and "rooms:" sections',
-      },
+      problem('plan/empty', { what: 'plan' }, { file: shownFile, line: 1, column: 1 }),
     ]);
   }
 
@@ -92,7 +73,7 @@ export async function loadPlan(planPath: string, registry: Registry, opts: LoadO
         schema: planSchema,
         value: source.data,
         base: [],
-        unknownKey: { code: 'plan/unknown-key', message: (key) => `unknown key "${key}"`, plural: 'keys allowed here' },
+        unknownKey: { word: (key, hint) => wording('plan/unknown-key', { key, hint }), plural: 'keys allowed here' },
       }),
     );
   }

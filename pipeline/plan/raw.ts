@@ -4,6 +4,7 @@
  * reports every problem.
  */
 import type { Problem, Severity } from '../problems/problem.ts';
+import type { ProblemCode } from '../problems/catalogue.ts';
 import type { PathSegment, PlanSource, Position } from './source.ts';
 import { formatPath } from './source.ts';
 
@@ -43,8 +44,9 @@ export function panelsOf(plan: RawRecord): { panel: RawRecord; room: number; ind
   return out;
 }
 
+/** A catalogued problem's code, message and hint (from `wording()` in problems/problem.ts). */
 export interface Wording {
-  code: string;
+  code: ProblemCode;
   message: string;
   hint?: string;
 }

@@ -6,6 +6,7 @@
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, visit } from 'yaml';
 import type { Document, Node as YamlNode } from 'yaml';
 import type { Problem } from '../problems/problem.ts';
+import { problem } from '../problems/problem.ts';
 import { wordYamlError } from './yaml-messages.ts';
 
 /** A step into the plan: a mapping key or a 0-based list index. */
@@ -138,30 +139,30 @@ export function readPlanSource(text: string): PlanSource {
   const problems: Problem[] = [];
   for (const error of doc.errors) {
     const p = pos(error.pos[0]);
-    const problem: Problem = { severity: 'error', code: 'plan/yaml-syntax', line: p.line, column: p.column, ...wordYamlError(error) };
-    if (error.code === 'DUPLICATE_KEY') {
+    const worded = wordYamlError(error);
+    if (worded === 'duplicate-key') {
       const key = keyAtOffset(doc, error.pos[0]);
-      problem.code = 'plan/duplicate-key';
-      if (key) {
-        problem.path = formatPath(key.path);
-        problem.message = `the key "${String(key.path[key.path.length - 1])}" appears twice in the same mapping`;
-      }
+      problems.push(
+        key
+          ? problem('plan/duplicate-key', { key: String(key.path[key.path.length - 1]) }, { line: p.line, column: p.column, path: formatPath(key.path) })
+          : problem('plan/duplicate-key', {}, { line: p.line, column: p.column }),
+      );
+    } else {
+      problems.push(problem('plan/yaml-syntax', worded, { line: p.line, column: p.column }));
     }
-    problems.push(problem);
   }
 
   visit(doc, {
     Alias(_, alias) {
       if (alias.resolve(doc) === undefined) {
         const p = pos(alias.range?.[0]);
-        problems.push({
-          severity: 'error',
-          code: 'plan/yaml-syntax',
-          line: p.line,
-          column: p.column,
-          message: `the YAML is not well-formed here: the alias *${alias.source} refers to no anchor before it`,
-          hint: `define "&${alias.source}" on an earlier value, or write the value out`,
-        });
+        problems.push(
+          problem(
+            'plan/yaml-syntax',
+            { detail: `the alias *${alias.source} refers to no anchor before it`, hint: `define "&${alias.source}" on an earlier value, or write the value out` },
+            { line: p.line, column: p.column },
+          ),
+        );
       }
     },
   });
@@ -172,14 +173,13 @@ export function readPlanSource(text: string): PlanSource {
     try {
       data = doc.toJS({ maxAliasCount: 100 });
     } catch (e) {
-      problems.push({
-        severity: 'error',
-        code: 'plan/yaml-syntax',
-        line: 1,
-        column: 1,
-        message: `the YAML could not be read (${e instanceof Error ? e.message : String(e)})`,
-        hint: 'simplify the anchors and aliases (&name, *name) in the plan',
-      });
+      problems.push(
+        problem(
+          'plan/yaml-syntax',
+          { whole: true, detail: `the YAML could not be read (${e instanceof Error ? e.message : String(e)})`, hint: 'simplify the anchors and aliases (&name, *name) in the plan' },
+          { line: 1, column: 1 },
+        ),
+      );
     }
   }
 

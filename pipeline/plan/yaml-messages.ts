@@ -4,15 +4,14 @@
  */
 import type { YAMLError } from 'yaml';
 
-export interface Wording {
-  message: string;
+/** What is wrong at the place (the catalogue's "plan/yaml-syntax" puts it after "the YAML is not well-formed here: "), and what to do. */
+export interface YamlWording {
+  detail: string;
   hint?: string;
 }
 
-const NOT_WELL_FORMED = 'the YAML is not well-formed here';
-
-function said(detail: string, hint?: string): Wording {
-  return hint === undefined ? { message: `${NOT_WELL_FORMED}: ${detail}` } : { message: `${NOT_WELL_FORMED}: ${detail}`, hint };
+function said(detail: string, hint?: string): YamlWording {
+  return hint === undefined ? { detail } : { detail, hint };
 }
 
 /** The parser's own first line, without its "at line …" tail, for cases not worded here. */
@@ -22,13 +21,13 @@ function parserSays(error: YAMLError): string {
 }
 
 /** Words a YAML syntax error for a curator. */
-export function wordYamlError(error: YAMLError): Wording {
+export function wordYamlError(error: YAMLError): YamlWording | 'duplicate-key' {
   const raw = parserSays(error);
   switch (error.code) {
     case 'TAB_AS_INDENT':
       return said('a tab is used for indentation', 'indent with spaces');
     case 'DUPLICATE_KEY':
-      return { message: 'a key appears twice in the same mapping', hint: 'keep only one of them' };
+      return 'duplicate-key';
     case 'BAD_INDENT':
       if (/flow/i.test(raw)) {
         return said('a [ list ] or { mapping } is not closed, or its next line is not indented enough', 'close the brackets, or indent the continuation further than its key');

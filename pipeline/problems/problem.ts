@@ -2,14 +2,17 @@
  * Problems found in a curator's files. Every message a user sees goes through
  * here: what happened, where (file:line:col and the path inside the plan), and
  * what to do. Errors stop the build; warnings say what the pipeline did instead.
+ * The wording of each code lives in ./catalogue.ts.
  */
+import { catalogue } from './catalogue.ts';
+import type { CatalogueEntry, ProblemArgs, ProblemCode } from './catalogue.ts';
 
 export type Severity = 'error' | 'warning';
 
 export interface Problem {
   severity: Severity;
-  /** Stable code, e.g. "plan/unknown-measure". */
-  code: string;
+  /** Stable code from the catalogue, e.g. "plan/unknown-measure". */
+  code: ProblemCode;
   /** Path of the file, relative to the working directory when possible. */
   file?: string;
   line?: number;
@@ -35,16 +38,36 @@ export function formatProblem(p: Problem): string {
   return head ? `${head}: ${body}` : body;
 }
 
-/** Thrown when a stage cannot go on; carries every problem found so far. */
-export class ProblemsError extends Error {
-  readonly problems: Problem[];
-  constructor(problems: Problem[]) {
-    super(problems.map(formatProblem).join('\n'));
-    this.name = 'ProblemsError';
-    this.problems = problems;
-  }
-}
-
 export function hasErrors(problems: readonly Problem[]): boolean {
   return problems.some((p) => p.severity === 'error');
+}
+
+/** Problems in reading order: by file, then line, then column; problems about a whole file before those at a place in it. */
+export function sortProblems(problems: readonly Problem[]): Problem[] {
+  return [...problems].sort(
+    (a, b) => (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0),
+  );
+}
+
+/** Where a problem is: any of file, line, column and the path inside the plan. */
+export type ProblemPlace = Pick<Problem, 'file' | 'line' | 'column' | 'path'>;
+
+/** The code, message and hint of a catalogued problem, worded from its arguments. */
+export function wording<C extends ProblemCode>(code: C, args: ProblemArgs<C>): { code: C; message: string; hint?: string } {
+  const e = catalogue[code] as unknown as CatalogueEntry<ProblemArgs<C>>;
+  const hint = e.hint(args);
+  return hint === undefined ? { code, message: e.message(args) } : { code, message: e.message(args), hint };
+}
+
+/** A catalogued problem at a place, with the catalogue's severity unless one is given. */
+export function problem<C extends ProblemCode>(code: C, args: ProblemArgs<C>, place: ProblemPlace = {}, severity?: Severity): Problem {
+  const e = catalogue[code] as unknown as CatalogueEntry<ProblemArgs<C>>;
+  const w = wording(code, args);
+  const p: Problem = { severity: severity ?? e.severity, code, ...definedOnly(place), message: w.message };
+  if (w.hint !== undefined) p.hint = w.hint;
+  return p;
+}
+
+function definedOnly(place: ProblemPlace): ProblemPlace {
+  return Object.fromEntries(Object.entries(place).filter(([, v]) => v !== undefined)) as ProblemPlace;
 }

@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs';
 import type { LexiconJob } from './jobs.ts';
 import type { WordCategories } from '../measures/types.ts';
 import type { Problem } from '../problems/problem.ts';
+import { problem } from '../problems/problem.ts';
 import { parseCategoryLexicon } from '../lexicons/categories.ts';
 
 export function readLexicons(jobs: LexiconJob[], problems: Problem[]): Record<string, WordCategories> {
@@ -15,18 +16,12 @@ export function readLexicons(jobs: LexiconJob[], problems: Problem[]): Record<st
     try {
       text = readFileSync(job.file, 'utf8');
     } catch (e) {
-      problems.push({
-        severity: 'error',
-        code: 'lexicon/unreadable',
-        file: job.display,
-        message: `the word list cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`,
-        hint: 'check the path in the plan',
-      });
+      problems.push(problem('lexicon/unreadable', { reason: (e as NodeJS.ErrnoException).code ?? String(e) }, { file: job.display }));
       continue;
     }
     const parsed = parseCategoryLexicon(text, job.display, job.id);
     for (const p of parsed.problems) {
-      problems.push({ severity: 'error', code: 'lexicon/malformed', file: job.display, line: p.line, column: p.column, message: p.message, ...(p.hint ? { hint: p.hint } : {}) });
+      problems.push(problem('lexicon/malformed', { detail: p.message, ...(p.hint ? { hint: p.hint } : {}) }, { file: job.display, line: p.line, column: p.column }));
     }
     if (parsed.lexicon) out[job.id] = parsed.lexicon;
   }

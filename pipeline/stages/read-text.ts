@@ -11,6 +11,7 @@ import { buildTextModel } from '../text/build.ts';
 import { findMentions } from '../text/mentions.ts';
 import type { CastMember, Mentions, TextModel, TextOptions } from '../text/model.ts';
 import type { Problem } from '../problems/problem.ts';
+import { problem } from '../problems/problem.ts';
 import { stableJson } from '../cache/cache.ts';
 
 export interface OpenedText {
@@ -50,15 +51,7 @@ export function readText(
   } catch (e) {
     return {
       text: null,
-      problems: [
-        {
-          severity: 'error',
-          code: 'text/unreadable',
-          file: displayName,
-          message: `the text file cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})`,
-          hint: 'check the path in the plan and the file permissions',
-        },
-      ],
+      problems: [problem('text/unreadable', { reason: (e as NodeJS.ErrnoException).code ?? String(e) }, { file: displayName })],
     };
   }
   const hash = hashBytes(bytes);
@@ -69,16 +62,7 @@ export function readText(
   if ('problem' in decoded) {
     return {
       text: null,
-      problems: [
-        {
-          severity: 'error',
-          code: 'text/not-utf8',
-          file: displayName,
-          line: decoded.problem.line,
-          column: decoded.problem.column,
-          message: decoded.problem.message,
-        },
-      ],
+      problems: [problem('text/not-utf8', { detail: decoded.problem.message }, { file: displayName, line: decoded.problem.line, column: decoded.problem.column })],
     };
   }
   const open = (): OpenedText => {

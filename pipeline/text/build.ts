@@ -17,6 +17,7 @@ import { splitSentences } from './sentences.ts';
 import { findStructure, type Unit } from './structure.ts';
 import { nextWord, vocabForm, wordFlags, type Span } from './tokens.ts';
 import { trimByMarkers } from './trim.ts';
+import { wording } from '../problems/problem.ts';
 
 /** Title of the single implicit chapter of a text without headings. */
 export const WHOLE_TEXT_TITLE = 'Whole text';
@@ -30,10 +31,7 @@ function compilePattern(source: string | undefined, id: string, warnings: TextWa
       // try the next flags
     }
   }
-  warnings.push({
-    code: 'text/bad-chapter-pattern',
-    message: `The chapter pattern "${source}" of the text "${id}" is not a valid regular expression, so chapters were found automatically instead. Fix the pattern (JavaScript regular-expression syntax) or remove it.`,
-  });
+  warnings.push(wording('text/bad-chapter-pattern', { id, pattern: source }));
   return undefined;
 }
 
@@ -53,19 +51,12 @@ export function buildTextModel(source: string, options: TextOptions): TextModel 
   const { units, patternMatches } = findStructure(text, { chapterPattern: pattern });
   const hasChapters = units.some((u) => u.t === 'heading' && u.kind === 'chapter');
   if (pattern && patternMatches === 0) {
-    const instead = hasChapters ? 'the part headings were taken as chapters' : 'the whole text is one chapter';
-    warnings.push({
-      code: 'text/chapter-pattern-unmatched',
-      message: `No line of the text "${options.id}" matches the chapter pattern "${options.chapterPattern}", so ${instead}. Check the pattern against a heading line of the text (it is searched for in each line, ignoring case; anchor it with ^ and $ to match whole lines).`,
-    });
+    warnings.push(wording('text/chapter-pattern-unmatched', { id: options.id, pattern: options.chapterPattern!, parts: hasChapters }));
   }
 
   const model = assemble(text, units, hasChapters, position);
   if (model.tokens.count === 0) {
-    warnings.push({
-      code: 'text/empty',
-      message: `The text "${options.id}" has no words${options.start || options.end ? ' between its start and end markers' : ''}. Check the file and the markers.`,
-    });
+    warnings.push(wording('text/empty', { id: options.id, markers: !!(options.start || options.end) }));
   }
   return { id: options.id, hash, text, ...model, sourceOffset, position, warnings };
 }

@@ -5,6 +5,7 @@
  * to the file as read. Per-token and per-sentence data live in typed-array
  * columns so that a million-word text stays compact.
  */
+import type { ProblemCode } from '../problems/catalogue.ts';
 
 export interface Chapter {
   /** 0-based position in `chapters`. */
@@ -70,8 +71,10 @@ export const TOKEN_FLAGS = {
 } as const;
 
 export interface TextWarning {
-  code: string;
+  /** A code of the problem catalogue (pipeline/problems/catalogue.ts). */
+  code: ProblemCode;
   message: string;
+  hint?: string;
   line?: number;
   column?: number;
 }

@@ -3,6 +3,7 @@
  */
 
 import type { TextWarning } from './model.ts';
+import { wording } from '../problems/problem.ts';
 
 export interface TrimResult {
   /** Offset of the first kept character. */
@@ -32,10 +33,7 @@ export function trimByMarkers(
   if (startMarker !== undefined && startMarker !== '') {
     const at = text.indexOf(startMarker);
     if (at === -1) {
-      warnings.push({
-        code: 'text/marker-not-found',
-        message: `The start marker "${startMarker}" does not occur in the text "${id}", so nothing was trimmed from the front. Check the marker against the text (it must match part of a line exactly, case included).`,
-      });
+      warnings.push(wording('text/marker-not-found', { id, marker: startMarker, end: 'start' }));
     } else {
       const nl = text.indexOf('\n', at + startMarker.length);
       start = nl === -1 ? text.length : nl + 1;
@@ -44,11 +42,7 @@ export function trimByMarkers(
   if (endMarker !== undefined && endMarker !== '') {
     const at = text.indexOf(endMarker, start);
     if (at === -1) {
-      const after = start > 0 ? ` after the start marker (line ${position(start).line})` : '';
-      warnings.push({
-        code: 'text/marker-not-found',
-        message: `The end marker "${endMarker}" does not occur in the text "${id}"${after}, so nothing was trimmed from the back. Check the marker against the text (it must match part of a line exactly, case included).`,
-      });
+      warnings.push(wording('text/marker-not-found', { id, marker: endMarker, end: 'end', ...(start > 0 ? { after: position(start).line } : {}) }));
     } else {
       const nl = text.lastIndexOf('\n', at - 1);
       end = nl === -1 || nl < start ? start : nl;

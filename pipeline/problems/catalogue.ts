@@ -1,0 +1,451 @@
+/**
+ * Every problem Vitrine can report, in one place: its stable code, a title,
+ * the message and the hint (what to do) as functions of what the check found,
+ * the usual severity, and an example for the curators' list of problems
+ * (docs/problems.md, written from this file by `npm run docs`).
+ *
+ * A check never writes a message of its own: it names a code and gives the
+ * arguments (`problem()` and `wording()` in ./problem.ts). Adding a check
+ * means adding its entry here; tests/problems/catalogue.test.ts fails when a
+ * code is used in the code base that this catalogue lacks.
+ */
+import type { Severity } from './problem.ts';
+
+export interface CatalogueEntry<A> {
+  /** A few words, for the list of problems. */
+  title: string;
+  /** Errors stop the build; warnings say what was done instead. */
+  severity: Severity;
+  /** What is wrong, in one sentence. */
+  message: (args: A) => string;
+  /** What to do about it (undefined when the message already says). */
+  hint: (args: A) => string | undefined;
+  /** Arguments of a typical case: the list of problems shows the message and hint they give. */
+  example: A;
+}
+
+function entry<A>(e: CatalogueEntry<A>): CatalogueEntry<A> {
+  return e;
+}
+
+/** A hint given as it is (often a field's own description from the plan schema). */
+const given = (a: { hint?: string }): string | undefined => a.hint;
+
+const STAY_INSIDE = (dir: string) => `paths must stay inside the exhibit folder (${dir}); move the file into it and write the path relative to it`;
+const NOT_WELL_FORMED = 'the YAML is not well-formed here';
+
+export const catalogue = {
+  // ——— the plan file ———
+  'plan/unreadable': entry<{ reason: string }>({
+    title: 'The plan cannot be read',
+    severity: 'error',
+    message: (a) => `cannot read the exhibit plan: ${a.reason}`,
+    hint: () => 'check the path given to the command; the plan is normally content/exhibit.yaml',
+    example: { reason: 'the file does not exist' },
+  }),
+  'plan/yaml-syntax': entry<{ detail: string; hint?: string; whole?: boolean }>({
+    title: 'The plan is not well-formed YAML',
+    severity: 'error',
+    message: (a) => (a.whole ? a.detail : `${NOT_WELL_FORMED}: ${a.detail}`),
+    hint: given,
+    example: { detail: 'a tab is used for indentation', hint: 'indent with spaces' },
+  }),
+  'plan/duplicate-key': entry<{ key?: string }>({
+    title: 'A key appears twice',
+    severity: 'error',
+    message: (a) => (a.key === undefined ? 'a key appears twice in the same mapping' : `the key "${a.key}" appears twice in the same mapping`),
+    hint: () => 'keep only one of them',
+    example: { key: 'title' },
+  }),
+  'plan/empty': entry<{ what: 'plan' | 'value'; hint?: string }>({
+    title: 'Nothing written',
+    severity: 'error',
+    message: (a) => (a.what === 'plan' ? 'the exhibit plan is empty' : 'the value is empty'),
+    hint: (a) => (a.what === 'plan' ? 'write "version: 1", then the "exhibit:", "texts:" and "rooms:" sections' : (a.hint ?? 'write a value, or remove the line')),
+    example: { what: 'value' },
+  }),
+  'plan/unknown-key': entry<{ key: string; hint: string }>({
+    title: 'A key the plan does not know',
+    severity: 'error',
+    message: (a) => `unknown key "${a.key}"`,
+    hint: given,
+    example: { key: 'titel', hint: 'did you mean "title"?' },
+  }),
+
+  // ——— values in the plan (worded from the schema's checks) ———
+  'plan/missing-key': entry<{ key: string; about?: string }>({
+    title: 'A required key is missing',
+    severity: 'error',
+    message: (a) => `"${a.key}" is missing`,
+    hint: (a) => (a.about ? `add "${a.key}:" here (${a.about})` : `add "${a.key}:" here`),
+    example: { key: 'organiser', about: 'Who puts on the exhibit, as credited on every page. Required.' },
+  }),
+  'plan/wrong-type': entry<{ expected: string; found: string; hint?: string }>({
+    title: 'A value of the wrong kind',
+    severity: 'error',
+    message: (a) => `expected ${a.expected}, found ${a.found}`,
+    hint: given,
+    example: { expected: 'a whole number', found: 'the text "twelve"' },
+  }),
+  'plan/invalid-value': entry<{ detail: string; hint?: string }>({
+    title: 'A value that is not accepted',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the text "bar" is not one of the accepted values', hint: 'did you mean "bars"? (accepted: "bars", "lines")' },
+  }),
+  'plan/too-few': entry<{ min: number; hint?: string }>({
+    title: 'A list with too few entries',
+    severity: 'error',
+    message: (a) => `the list needs at least ${a.min} ${a.min === 1 ? 'entry' : 'entries'}`,
+    hint: given,
+    example: { min: 1 },
+  }),
+  'plan/too-many': entry<{ max: number; hint?: string }>({
+    title: 'A list with too many entries',
+    severity: 'error',
+    message: (a) => `the list may have at most ${a.max} ${a.max === 1 ? 'entry' : 'entries'}`,
+    hint: given,
+    example: { max: 12 },
+  }),
+  'plan/too-short': entry<{ min: number; hint?: string }>({
+    title: 'A text that is too short',
+    severity: 'error',
+    message: (a) => `the text must be at least ${a.min} characters long`,
+    hint: given,
+    example: { min: 3 },
+  }),
+  'plan/too-long': entry<{ max: number; hint?: string }>({
+    title: 'A text that is too long',
+    severity: 'error',
+    message: (a) => `the text may be at most ${a.max} characters long`,
+    hint: given,
+    example: { max: 200 },
+  }),
+  'plan/too-small': entry<{ bound: string; found: string; hint?: string }>({
+    title: 'A number that is too small',
+    severity: 'error',
+    message: (a) => `must be ${a.bound}, found ${a.found}`,
+    hint: given,
+    example: { bound: '2 or more', found: 'the number 1' },
+  }),
+  'plan/too-big': entry<{ bound: string; found: string; hint?: string }>({
+    title: 'A number that is too big',
+    severity: 'error',
+    message: (a) => `must be ${a.bound}, found ${a.found}`,
+    hint: given,
+    example: { bound: '1000 or less', found: 'the number 5000' },
+  }),
+  'plan/bad-format': entry<{ detail: string; hint?: string }>({
+    title: 'A value not in the expected form',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the language must be a two-letter ISO 639-1 code in lower case, e.g. "en"' },
+  }),
+  'plan/invalid': entry<{ detail: string; hint?: string }>({
+    title: 'A value the plan cannot use',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the note points at more than one thing', hint: 'give exactly one of: chapter, character, word, segment' },
+  }),
+
+  // ——— ids and names ———
+  'plan/duplicate-id': entry<{ label: string; id: string; line: number }>({
+    title: 'An id used twice',
+    severity: 'error',
+    message: (a) => `the ${a.label} id "${a.id}" is used more than once`,
+    hint: (a) => `it is first used on line ${a.line}; give each ${a.label} its own id`,
+    example: { label: 'panel', id: 'who-appears', line: 41 },
+  }),
+  'plan/shared-alias': entry<{ name: string; first: string; second: string }>({
+    title: 'Two characters share a name',
+    severity: 'warning',
+    message: (a) => `the name "${a.name}" is given to both "${a.first}" and "${a.second}"`,
+    hint: () => 'where it appears in the text it will be counted as ambiguous, not given to either; remove it from one of them if it means one character',
+    example: { name: 'rook', first: 'tamsin', second: 'jory' },
+  }),
+
+  // ——— files the plan names ———
+  'plan/path-outside': entry<{ what: string; written: string; dir: string; how: 'absolute' | 'outside' | 'link' }>({
+    title: 'A path that leaves the exhibit folder',
+    severity: 'error',
+    message: (a) =>
+      a.how === 'absolute'
+        ? `the ${a.what} path "${a.written}" is absolute`
+        : a.how === 'outside'
+          ? `the ${a.what} path "${a.written}" leads outside the exhibit folder`
+          : `the ${a.what} path "${a.written}" leads outside the exhibit folder through a symbolic link`,
+    hint: (a) => (a.how === 'link' ? `${STAY_INSIDE(a.dir)} (copy it rather than link to it)` : STAY_INSIDE(a.dir)),
+    example: { what: 'text', written: '../novel.txt', dir: 'content', how: 'outside' },
+  }),
+  'plan/not-a-file': entry<{ what: string; written: string; folder: 'exhibit' | 'other' }>({
+    title: 'A path that names a folder',
+    severity: 'error',
+    message: (a) => (a.folder === 'exhibit' ? `the ${a.what} path "${a.written}" names the exhibit folder itself` : `the ${a.what} path "${a.written}" is a folder, not a file`),
+    hint: () => 'name a file inside it',
+    example: { what: 'caption', written: 'captions', folder: 'other' },
+  }),
+  'plan/not-mdx': entry<{ what: string; written: string }>({
+    title: 'A caption that is not Markdown',
+    severity: 'error',
+    message: (a) => `the ${a.what} "${a.written}" is not an MDX file`,
+    hint: () => 'name a file ending in .mdx (or .md for plain Markdown)',
+    example: { what: 'caption', written: 'captions/who-appears.txt' },
+  }),
+  'plan/missing-file': entry<{ what: string; written: string; looked: string }>({
+    title: 'A file that does not exist',
+    severity: 'error',
+    message: (a) => `the ${a.what} file "${a.written}" does not exist`,
+    hint: (a) => `looked for ${a.looked}; create it or correct the path`,
+    example: { what: 'caption', written: 'captions/who-apears.mdx', looked: 'content/captions/who-apears.mdx' },
+  }),
+
+  // ——— panels ———
+  'plan/missing-text': entry<{ ids: string }>({
+    title: 'A panel that does not say which text it reads',
+    severity: 'error',
+    message: () => 'the panel does not say which text it reads, and the plan has several',
+    hint: (a) => `add "text:" with one of: ${a.ids}`,
+    example: { ids: '"lamps", "ledger"' },
+  }),
+  'plan/unknown-text': entry<{ text: string; hint: string }>({
+    title: 'A panel names a text the plan lacks',
+    severity: 'error',
+    message: (a) => `unknown text "${a.text}"`,
+    hint: given,
+    example: { text: 'lamp', hint: 'did you mean "lamps"?' },
+  }),
+  'plan/unknown-measure': entry<{ measure: string; hint: string }>({
+    title: 'A measure Vitrine does not have',
+    severity: 'error',
+    message: (a) => `unknown measure "${a.measure}"`,
+    hint: given,
+    example: { measure: 'frequncy', hint: 'did you mean "frequency"?' },
+  }),
+  'plan/needs-cast': entry<{ measure: string }>({
+    title: 'A measure that needs a cast',
+    severity: 'error',
+    message: (a) => `the measure "${a.measure}" needs a cast, and the plan has none`,
+    hint: () => 'add a "cast:" list naming the characters (id and name of each)',
+    example: { measure: 'presence' },
+  }),
+  'plan/unknown-param': entry<{ key: string; measure: string; hint: string }>({
+    title: 'A parameter the measure does not have',
+    severity: 'error',
+    message: (a) => `unknown parameter "${a.key}" for measure "${a.measure}"`,
+    hint: given,
+    example: { key: 'limt', measure: 'frequency', hint: 'did you mean "limit"?' },
+  }),
+  'plan/unknown-chart': entry<{ chart: string; hint: string }>({
+    title: 'A chart kind Vitrine does not have',
+    severity: 'error',
+    message: (a) => `unknown chart "${a.chart}"`,
+    hint: given,
+    example: { chart: 'pie', hint: '"frequency" can be drawn as: "bars", "lines", "multiples", "treemap"' },
+  }),
+  'plan/chart-not-supported': entry<{ measure: string; chart: string; charts: string }>({
+    title: 'A measure that cannot be drawn as this chart',
+    severity: 'error',
+    message: (a) => `the measure "${a.measure}" cannot be drawn as "${a.chart}"`,
+    hint: (a) => (a.charts ? `it can be drawn as: ${a.charts}` : 'it names no chart it can be drawn as'),
+    example: { measure: 'structure', chart: 'network', charts: '"bars", "lines"' },
+  }),
+  'plan/unknown-option': entry<{ key: string; chart: string; hint: string }>({
+    title: 'An option the chart does not have',
+    severity: 'error',
+    message: (a) => `unknown option "${a.key}" for chart "${a.chart}"`,
+    hint: given,
+    example: { key: 'orientaton', chart: 'bars', hint: 'did you mean "orientation"?' },
+  }),
+  'plan/unknown-cast': entry<{ id: string; hint: string }>({
+    title: 'A character the cast lacks',
+    severity: 'error',
+    message: (a) => `unknown cast member "${a.id}"`,
+    hint: given,
+    example: { id: 'tamsn', hint: 'did you mean "tamsin"?' },
+  }),
+  'plan/unknown-lexicon': entry<{ name: string; ids: string[] }>({
+    title: 'A word list the plan does not name',
+    severity: 'error',
+    message: (a) => `unknown word list "${a.name}"`,
+    hint: (a) => (a.ids.length ? `the plan's word lists are: ${a.ids.join(', ')}` : 'add a "lexicons:" list naming the file (id and file)'),
+    example: { name: 'mood', ids: ['moods'] },
+  }),
+
+  // ——— texts ———
+  'text/unreadable': entry<{ reason: string }>({
+    title: 'A text file cannot be read',
+    severity: 'error',
+    message: (a) => `the text file cannot be read (${a.reason})`,
+    hint: () => 'check the path in the plan and the file permissions',
+    example: { reason: 'EACCES' },
+  }),
+  'text/not-utf8': entry<{ detail: string }>({
+    title: 'A text that is not UTF-8',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: {
+      detail:
+        'texts/tale.txt is not valid UTF-8: the byte 0xE9 at line 12, column 31 (byte offset 804) is not part of a UTF-8 character. Re-save the file as UTF-8 (in most editors: Save As, then choose the UTF-8 encoding) and build again.',
+    },
+  }),
+  'text/empty': entry<{ id: string; markers: boolean }>({
+    title: 'A text with no words',
+    severity: 'warning',
+    message: (a) => `The text "${a.id}" has no words${a.markers ? ' between its start and end markers' : ''}. Check the file and the markers.`,
+    hint: () => undefined,
+    example: { id: 'lamps', markers: true },
+  }),
+  'text/marker-not-found': entry<{ id: string; marker: string; end: 'start' | 'end'; after?: number }>({
+    title: 'A trim marker that is not in the text',
+    severity: 'warning',
+    message: (a) =>
+      a.end === 'start'
+        ? `The start marker "${a.marker}" does not occur in the text "${a.id}", so nothing was trimmed from the front. Check the marker against the text (it must match part of a line exactly, case included).`
+        : `The end marker "${a.marker}" does not occur in the text "${a.id}"${a.after !== undefined ? ` after the start marker (line ${a.after})` : ''}, so nothing was trimmed from the back. Check the marker against the text (it must match part of a line exactly, case included).`,
+    hint: () => undefined,
+    example: { id: 'lamps', marker: 'BEGIN TEXT', end: 'start' },
+  }),
+  'text/bad-chapter-pattern': entry<{ id: string; pattern: string }>({
+    title: 'A chapter pattern that is not a regular expression',
+    severity: 'warning',
+    message: (a) =>
+      `The chapter pattern "${a.pattern}" of the text "${a.id}" is not a valid regular expression, so chapters were found automatically instead. Fix the pattern (JavaScript regular-expression syntax) or remove it.`,
+    hint: () => undefined,
+    example: { id: 'lamps', pattern: '^CHAPTER (' },
+  }),
+  'text/chapter-pattern-unmatched': entry<{ id: string; pattern: string; parts: boolean }>({
+    title: 'A chapter pattern that matches no line',
+    severity: 'warning',
+    message: (a) =>
+      `No line of the text "${a.id}" matches the chapter pattern "${a.pattern}", so ${a.parts ? 'the part headings were taken as chapters' : 'the whole text is one chapter'}. Check the pattern against a heading line of the text (it is searched for in each line, ignoring case; anchor it with ^ and $ to match whole lines).`,
+    hint: () => undefined,
+    example: { id: 'lamps', pattern: '^Chapter \\d+$', parts: false },
+  }),
+
+  // ——— word lists ———
+  'lexicon/unreadable': entry<{ reason: string }>({
+    title: 'A word list cannot be read',
+    severity: 'error',
+    message: (a) => `the word list cannot be read (${a.reason})`,
+    hint: () => 'check the path in the plan',
+    example: { reason: 'ENOENT' },
+  }),
+  'lexicon/malformed': entry<{ detail: string; hint?: string }>({
+    title: 'A line of a word list that cannot be read',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the row has 3 cells but 2 are expected (word, category)', hint: 'give every row the same tab-separated cells: word, category' },
+  }),
+
+  // ——— dialogue ———
+  'dialogue/pin-no-match': entry<{ detail: string }>({
+    title: 'A dialogue pin that matches no quotation',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: {
+      detail:
+        'the pin for chapter 2 starting “Hold the lamp” matches no quotation (chapter 2 has 14 quotations, none starting with these words), so it was not applied. Copy the first words of the quotation exactly as the text has them, and check the chapter number.',
+    },
+  }),
+  'dialogue/pin-several': entry<{ detail: string }>({
+    title: 'A dialogue pin that matches several quotations',
+    severity: 'warning',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: { detail: 'the pin for chapter 2 starting “Yes” matches 3 quotations; it was applied to the first (“Yes, and the tide with it.”). Add more of the quotation\'s words to make it unique.' },
+  }),
+  'dialogue/pin-unknown-speaker': entry<{ detail: string }>({
+    title: 'A dialogue pin names a speaker the cast lacks',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: {
+      detail:
+        'the pin for chapter 2 starting “Hold the lamp” names the speaker "abell", who is not in the cast; the quotation was left without a speaker. Use a cast id, or null for someone outside the cast.',
+    },
+  }),
+  'dialogue/pin-unknown-addressee': entry<{ detail: string }>({
+    title: 'A dialogue pin names an addressee the cast lacks',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: {
+      detail: 'the pin for chapter 2 starting “Hold the lamp” names the addressee "tamsn", who is not in the cast; the addressee was left empty. Use a cast id, or null.',
+    },
+  }),
+  'dialogue/unbalanced': entry<{ chapter: number; paragraph: number; detail: string }>({
+    title: 'Quotation marks that do not pair up',
+    severity: 'warning',
+    message: (a) => `chapter ${a.chapter}, paragraph ${a.paragraph}: ${a.detail}`,
+    hint: () => undefined,
+    example: {
+      chapter: 3,
+      paragraph: 12,
+      detail: 'a quotation (“Bring the lamp down to the…”) has no closing mark and the next paragraph does not go on with it. Add the missing closing mark.',
+    },
+  }),
+
+  // ——— panels, measured and drawn ———
+  'panel/measure-failed': entry<{ measure: string; reason: string }>({
+    title: 'A measure that cannot run with these parameters',
+    severity: 'error',
+    message: (a) => `the measure "${a.measure}" cannot run with these parameters: ${a.reason}`,
+    hint: () => 'change the parameters of this panel',
+    example: { measure: 'presence', reason: 'characters names ids that are not in the cast: tamsn' },
+  }),
+  'note/unresolved': entry<{ detail: string; hint: string }>({
+    title: 'A note that points at nothing on the chart',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the note points at chapter 9, but the text has 6 chapters', hint: 'use a chapter from 1 to 6' },
+  }),
+  'note/not-drawn': entry<Record<string, never>>({
+    title: 'A note shown beside the chart',
+    severity: 'warning',
+    message: () => 'the note could not be placed on the chart, so it is shown only beside it',
+    hint: () => 'point it at something the chart draws',
+    example: {},
+  }),
+
+  // ——— the command line ———
+  'cli/param': entry<{ detail: string }>({
+    title: 'A --param the measure cannot use',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => undefined,
+    example: { detail: 'Too small: expected number to be >=1' },
+  }),
+  'cli/needs-cast': entry<{ measure: string }>({
+    title: 'A measure run without its cast',
+    severity: 'error',
+    message: (a) => `the measure "${a.measure}" needs a cast`,
+    hint: () => 'pass --cast CAST.yaml (a YAML list of { id, name, aliases, pronoun })',
+    example: { measure: 'presence' },
+  }),
+  'cast/unreadable': entry<{ reason: string }>({
+    title: 'A cast file cannot be read',
+    severity: 'error',
+    message: (a) => `the cast file cannot be read: ${a.reason}`,
+    hint: () => undefined,
+    example: { reason: "ENOENT: no such file or directory, open 'cast.yaml'" },
+  }),
+  'cast/invalid': entry<{ detail: string }>({
+    title: 'A cast file entry that is not valid',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: () => 'the cast file is a YAML list of { id, name, aliases, pronoun }',
+    example: { detail: 'Invalid input: expected string, received number' },
+  }),
+} as const;
+
+export type ProblemCode = keyof typeof catalogue;
+
+/** The arguments a code's message and hint are worded from. */
+export type ProblemArgs<C extends ProblemCode> = (typeof catalogue)[C]['example'];
