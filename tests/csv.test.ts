@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { parse } from 'csv-parse/sync';
-import { FORMULA_STARTS, neutraliseFormula, tableToCsv } from '../pipeline/csv.ts';
+import { FORMULA_STARTS, neutraliseFormula, tableToCsv } from '../pipeline/stages/csv.ts';
 import type { Table } from '../pipeline/charts/types.ts';
 
 /** Reads a CSV download back with csv-parse, a general-purpose RFC 4180 reader from the npm registry. */

@@ -414,6 +414,18 @@ export const catalogue = {
     example: {},
   }),
 
+  // ——— the build ———
+  'build/out-refused': entry<{ detail: string; hint: string }>({
+    title: 'An output folder a build may not replace',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: {
+      detail: 'the output folder holds files that no Vitrine build wrote (notes.txt, photos)',
+      hint: 'a build replaces only an empty folder or one it built itself (marked by its .vitrine-build file): choose another folder with --out, or move those files away. A site built by a Vitrine older than this marker has to be deleted by hand, once',
+    },
+  }),
+
   // ——— the command line ———
   'cli/param': entry<{ detail: string }>({
     title: 'A --param the measure cannot use',

@@ -17,6 +17,7 @@ const AREAS: Record<string, string> = {
   panel: 'Panels',
   note: 'Notes',
   caption: 'Captions',
+  build: 'Building the site',
   cli: 'The command line',
   cast: 'The command line',
 };

@@ -12,6 +12,7 @@
 import { cpSync, existsSync, lstatSync, mkdirSync, readdirSync, readFileSync, realpathSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { basename, dirname, join, relative, resolve, sep } from 'node:path';
 import type { Problem } from '../problems/problem.ts';
+import { problem } from '../problems/problem.ts';
 import { displayPath } from '../plan/files.ts';
 
 /** Name of the marker file every build leaves at the top of its output folder. */
@@ -43,8 +44,8 @@ function holds(folder: string, candidate: string): boolean {
   return rel === '' || (!rel.startsWith(`..${sep}`) && rel !== '..' && !rel.startsWith(sep) && !/^[A-Za-z]:/.test(rel));
 }
 
-function refusal(out: string, cwd: string, message: string, hint: string): Problem {
-  return { severity: 'error', code: 'build/out-refused', file: displayPath(out, cwd), message, hint };
+function refusal(out: string, cwd: string, detail: string, hint: string): Problem {
+  return problem('build/out-refused', { detail, hint }, { file: displayPath(out, cwd) });
 }
 
 const ELSEWHERE = 'build into a folder of its own with --out (for example --out dist, the default, beside the exhibit folder)';
