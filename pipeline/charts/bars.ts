@@ -4,18 +4,18 @@
  */
 
 import { z } from 'zod';
-import type { BarsData, ChartOutput, PinnedNote, Table } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { BarsData, NoteAt, Table } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatPercent, formatValue, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import type { ValueAxis } from './scale.ts';
 import { legend } from './legend.ts';
 import { thinEvenly } from './place.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const barsOptions = z.strictObject({
@@ -130,7 +130,7 @@ function extremesSentence(items: Item[], data: BarsData, fmt: (v: number) => str
   );
 }
 
-function barsAlt(data: BarsData, prep: Prepared, opts: BarsOptions, drawn: readonly PinnedNote[]): string {
+function barsAlt(data: BarsData, prep: Prepared, opts: BarsOptions): string {
   const multi = data.series.length > 1;
   let main: string;
   if (!multi || data.format === 'count') {
@@ -155,8 +155,20 @@ function barsAlt(data: BarsData, prep: Prepared, opts: BarsOptions, drawn: reado
     const which = opts.sort === 'descending' ? 'highest' : opts.sort === 'ascending' ? 'lowest' : 'first';
     parts.push(`The chart shows the ${which} ${prep.shown.length} of ${data.categories.length} categories; the table lists all.`);
   }
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
+}
+
+/* ---------- notes ---------- */
+
+/** A note goes on a category, by its name: beside the chart when the category is not among those drawn. */
+interface Target {
+  category: string;
+}
+
+function place(at: NoteAt, data: BarsData, prep: Prepared): Target | Miss {
+  const c = at.category;
+  if (c === undefined || !data.categories.includes(c)) return 'absent';
+  return prep.shown.some((i) => data.categories[i] === c) ? { category: c } : 'beside';
 }
 
 /* ---------- drawing ---------- */
@@ -166,7 +178,7 @@ interface Ctx {
   prep: Prepared;
   opts: BarsOptions;
   theme: Theme;
-  notes: readonly PinnedNote[];
+  notes: readonly Placed<Target>[];
   width: number;
   narrow: boolean;
 }
@@ -214,8 +226,8 @@ function axisValues(ctx: Ctx): number[] {
   return out;
 }
 
-function notesFor(ctx: Ctx, c: number): PinnedNote[] {
-  return ctx.notes.filter((n) => n.at.category === ctx.data.categories[c]);
+function notesFor(ctx: Ctx, c: number): Placed<Target>[] {
+  return ctx.notes.filter((n) => n.category === ctx.data.categories[c]);
 }
 
 function legendBlock(ctx: Ctx, y: number) {
@@ -262,7 +274,7 @@ function drawHorizontal(ctx: Ctx): { body: string; height: number } {
   const valueTexts = prep.shown.flatMap((c) => valueLabels(ctx, c).map((l) => prep.fmt(l.v)));
   const valueW = valueTexts.length ? Math.max(...valueTexts.map((t) => textWidth(t, small))) + 6 : 0;
   const hasNeg = axisValues(ctx).some((v) => v < 0);
-  const noteSpace = Math.max(0, ...prep.shown.map((c) => notesFor(ctx, c).reduce((s, n) => s + markerWidth(n.label, theme) + 4, 0)));
+  const noteSpace = Math.max(0, ...prep.shown.map((c) => notesFor(ctx, c).reduce((s, n) => s + markerWidth(n.note.label, theme) + 4, 0)));
   const reserved = valueW + (noteSpace ? noteSpace + 6 : 0) + (hasNeg ? valueW + 6 : 0);
   const labelMax = Math.max(48, Math.min(W * (narrow ? 0.36 : 0.3), W - 2 * PAD - reserved - W * 0.4 - 10));
   const labels = prep.shown.map((c) => truncateText(data.categories[c], labelMax, fs));
@@ -335,8 +347,8 @@ function drawHorizontal(ctx: Ctx): { body: string; height: number } {
     }
     let nx = reach + 6;
     for (const n of notesFor(ctx, c)) {
-      const w = markerWidth(n.label, theme);
-      g.push(noteInline(n, nx + w / 2, cy, theme));
+      const w = markerWidth(n.note.label, theme);
+      g.push(noteInline(n.note, nx + w / 2, cy, theme));
       nx += w + 4;
     }
     return el('g', { class: 'vt-bar-group', 'data-category': data.categories[c] }, g);
@@ -376,7 +388,7 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
   parts.push(textEl(truncateText(data.valueLabel, W - 2 * PAD, theme.sizes.axisTitle, 'serif'), { ...headStyle, x: PAD, y: headY, class: 'vt-axis-title' }));
   y = headY + 8;
 
-  const drawnNotes = ctx.notes.filter((nt) => prep.shown.some((c) => data.categories[c] === nt.at.category));
+  const drawnNotes = ctx.notes.filter((nt) => prep.shown.some((c) => data.categories[c] === nt.category));
   const mh = markerHeight(theme);
   const laneY = y + mh / 2;
   if (drawnNotes.length) y += mh + 10;
@@ -460,7 +472,7 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
             transform: `rotate(-45 ${num(cx + fs * 0.3)} ${num(plotBottom + 10)})`,
           }),
     );
-    for (const nt of notesFor(ctx, c)) anchors.push({ note: nt, x: cx, y: top - 4 });
+    for (const nt of notesFor(ctx, c)) anchors.push({ note: nt.note, x: cx, y: top - 4 });
     return el('g', { class: 'vt-bar-group', 'data-category': data.categories[c] }, g);
   });
   parts.push(el('g', { class: 'vt-bars' }, groups));
@@ -480,41 +492,17 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(catY + PAD) };
 }
 
-function renderBars(data: BarsData, options: BarsOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = barsOptions.parse(options);
-  const id = chartId('bars', opts.id, data, opts, notes);
-  const prep = prepare(data, opts);
-  const table = barsTable(data, prep);
-  const reason = emptyReason(data, prep);
-  if (reason) {
-    return {
-      svg: emptyChart('bars', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('bars', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const shownNames = new Set(prep.shown.map((c) => data.categories[c]));
-  const drawn = notes.filter((n) => n.at.category !== undefined && shownNames.has(n.at.category));
-  const alt = barsAlt(data, prep, opts, drawn);
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const ctx: Ctx = { data, prep, opts, theme, notes: drawn, width, narrow };
-    const vertical = opts.orientation === 'vertical' && (width - 2 * PAD - 48) / prep.shown.length >= MIN_BAND;
-    const { body, height } = vertical ? drawVertical(ctx) : drawHorizontal(ctx);
-    return frame({ kind: 'bars', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: notes.filter((n) => !drawn.includes(n)).map((n) => n.label),
-  };
-}
-
-export const bars: Chart<BarsData, typeof barsOptions> = {
+export const bars = defineChart({
   name: 'bars',
   options: barsOptions,
-  render: renderBars,
-};
+  prepare: (data: BarsData, opts) => prepare(data, opts),
+  empty: ({ data, prep }) => emptyReason(data, prep),
+  table: ({ data, prep }) => barsTable(data, prep),
+  place: (at, { data, prep }) => place(at, data, prep),
+  alt: ({ data, prep, opts }) => barsAlt(data, prep, opts),
+  draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => {
+    const ctx: Ctx = { data, prep, opts, theme, notes, width, narrow };
+    const vertical = opts.orientation === 'vertical' && (width - 2 * PAD - 48) / prep.shown.length >= MIN_BAND;
+    return vertical ? drawVertical(ctx) : drawHorizontal(ctx);
+  },
+});

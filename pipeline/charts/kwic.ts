@@ -7,16 +7,16 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, KwicData, PinnedNote, Table } from './types.ts';
-import { defaultTheme } from './theme.ts';
+import type { KwicData, NoteAt, Table } from './types.ts';
+import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { formatNumber, joinWords, sentence } from './format.ts';
 import { boldWidth, clipEnd, clipStart, collapseSpace } from './clip.ts';
 import { mixColour } from './colour.ts';
-import { markerWidth, noteInline, noteSentences } from './notes.ts';
+import { markerWidth, noteInline } from './notes.ts';
 
 export const kwicOptions = z.strictObject({
   limit: z
@@ -111,7 +111,7 @@ function quoted(s: string): string {
   return `\u201C${s}\u201D`;
 }
 
-function kwicAlt(data: KwicData, lines: Line[], shown: number, drawn: readonly PinnedNote[]): string {
+function kwicAlt(data: KwicData, lines: Line[], shown: number): string {
   const n = lines.length;
   const what = `Concordance of ${quoted(collapseSpace(data.keyword))}: ${formatNumber(n, 0)} ${n === 1 ? 'line' : 'lines'}`;
   const { words, count } = commonestRight(lines);
@@ -126,8 +126,20 @@ function kwicAlt(data: KwicData, lines: Line[], shown: number, drawn: readonly P
   }
   const parts = [sentence(`${what}; ${next}`)];
   if (shown < n) parts.push(`The chart shows ${formatNumber(shown, 0)} of them; the table lists all.`);
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
+}
+
+/* ---------- notes ---------- */
+
+/** A note points at a line by its index in the data (at.x); it is drawn when the line is. */
+interface Target {
+  line: number;
+}
+
+function place(at: NoteAt, lines: readonly Line[], shown: readonly Line[]): Target | Miss {
+  const x = at.x;
+  if (x === undefined || !Number.isInteger(x) || x < 0 || x >= lines.length) return 'absent';
+  return shown.some((l) => l.index === x) ? { line: x } : 'beside';
 }
 
 /* ---------- drawing ---------- */
@@ -141,7 +153,7 @@ interface Ctx {
   lines: Line[];
   shown: Line[];
   theme: Theme;
-  notes: readonly PinnedNote[];
+  notes: readonly Placed<Target>[];
   width: number;
   narrow: boolean;
 }
@@ -154,7 +166,7 @@ function drawKwic(ctx: Ctx): { body: string; height: number } {
   const parts: string[] = [];
 
   // Columns: notes | where | before | keyword | after.
-  const noteW = ctx.notes.length ? Math.max(...ctx.notes.map((n) => markerWidth(n.label, theme))) + 6 : 0;
+  const noteW = ctx.notes.length ? Math.max(...ctx.notes.map((n) => markerWidth(n.note.label, theme))) + 6 : 0;
   const whereMax = narrow ? 58 : 112;
   const hasWhere = shown.some((l) => l.where !== '');
   const wheres = shown.map((l) => truncateText(l.where, whereMax, small));
@@ -195,7 +207,7 @@ function drawKwic(ctx: Ctx): { body: string; height: number } {
     if (l.left) g.push(textEl(clipStart(l.left, leftEnd - textLeft, fs, 'serif'), { x: leftEnd, y: base, 'text-anchor': 'end', style }));
     g.push(textEl(keywords[r], { x: axis, y: base, 'text-anchor': 'middle', 'font-weight': 700, style }));
     if (l.right) g.push(textEl(clipEnd(l.right, textRight - rightStart, fs, 'serif'), { x: rightStart, y: base, style }));
-    const note = ctx.notes.find((n) => n.at.x === l.index);
+    const note = ctx.notes.find((n) => n.line === l.index)?.note;
     if (note) g.push(noteInline(note, PAD + markerWidth(note.label, theme) / 2, top + rowH / 2, theme));
     return el('g', { class: 'vt-kwic-line', 'data-line': l.index }, g);
   });
@@ -216,46 +228,15 @@ function drawKwic(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(y + PAD) };
 }
 
-function renderKwic(data: KwicData, options: KwicOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = kwicOptions.parse(options);
-  const id = chartId('kwic', opts.id, data, opts, notes);
-  const { lines, shown } = prepare(data, opts);
-  const table = kwicTable(lines);
-  if (lines.length === 0) {
-    const reason = 'the dataset has no concordance lines.';
-    return {
-      svg: emptyChart('kwic', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('kwic', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  // A note points at a line by its index in the data (at.x); one marker per line, the first note wins.
-  const shownIndex = new Set(shown.map((l) => l.index));
-  const taken = new Set<number>();
-  const drawn = notes.filter((n) => {
-    const x = n.at.x;
-    if (x === undefined || !Number.isInteger(x) || !shownIndex.has(x) || taken.has(x)) return false;
-    taken.add(x);
-    return true;
-  });
-  const alt = kwicAlt(data, lines, shown.length, drawn);
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawKwic({ data, lines, shown, theme, notes: drawn, width, narrow });
-    return frame({ kind: 'kwic', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: notes.filter((n) => !drawn.includes(n)).map((n) => n.label),
-  };
-}
-
-export const kwic: Chart<KwicData, typeof kwicOptions> = {
+export const kwic = defineChart({
   name: 'kwic',
   options: kwicOptions,
-  render: renderKwic,
-};
+  prepare: (data: KwicData, opts) => prepare(data, opts),
+  empty: ({ prep }) => (prep.lines.length === 0 ? 'the dataset has no concordance lines.' : null),
+  table: ({ prep }) => kwicTable(prep.lines),
+  place: (at, { prep }) => place(at, prep.lines, prep.shown),
+  // One marker per line: the first note on it.
+  slot: (t) => t.line,
+  alt: ({ data, prep }) => kwicAlt(data, prep.lines, prep.shown.length),
+  draw: ({ data, prep, theme }, notes, { width, narrow }) => drawKwic({ data, lines: prep.lines, shown: prep.shown, theme, notes, width, narrow }),
+});

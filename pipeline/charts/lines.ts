@@ -6,16 +6,16 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, LinesData, PinnedNote, Table } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { LinesData, NoteAt, Table } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, polylinePath, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatValue, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { spreadApart, thinEvenly } from './place.ts';
-import { markerHeight, notesInLane, noteSentences } from './notes.ts';
+import { markerHeight, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const linesOptions = z.strictObject({
@@ -116,7 +116,7 @@ function extreme(vs: (number | null)[], pick: 'max' | 'min'): { i: number; v: nu
 
 const MAX_SERIES_IN_ALT = 5;
 
-function linesAlt(data: LinesData, values: Values, fmt: (v: number) => string, drawn: readonly PinnedNote[]): string {
+function linesAlt(data: LinesData, values: Values, fmt: (v: number) => string): string {
   const peaks = data.series
     .map((s, si) => ({ name: s.name, peak: extreme(values[si], 'max'), low: extreme(values[si], 'min') }))
     .filter((p): p is { name: string; peak: { i: number; v: number }; low: { i: number; v: number } } => p.peak !== null && p.low !== null);
@@ -134,27 +134,31 @@ function linesAlt(data: LinesData, values: Values, fmt: (v: number) => string, d
     if (rest > 0) listed.push(`${rest} more series in the table`);
     main = `${data.yLabel}: ${listed.join('; ')}`;
   }
-  const parts = [sentence(main)];
-  if (drawn.length) parts.push(noteSentences(drawn));
-  return parts.join(' ');
+  return sentence(main);
 }
 
 /* ---------- notes ---------- */
 
-/** Where a note points, in data terms: a position index (maybe fractional) and maybe a series; null when not in the data. */
-function noteTarget(note: PinnedNote, data: LinesData, values: Values): { x: number; s: number | null } | null {
-  const s = note.at.series === undefined ? null : data.series.findIndex((x) => x.id === note.at.series);
-  if (s === -1) return null;
-  let x = note.at.x;
+/** Where a note points: a position index (maybe fractional) and maybe a series. */
+interface Target {
+  x: number;
+  s: number | null;
+}
+
+function place(at: NoteAt, data: LinesData, values: Values): Target | Miss {
+  const s = at.series === undefined ? null : data.series.findIndex((x) => x.id === at.series);
+  if (s === -1) return 'absent';
+  let x = at.x;
   if (x === undefined) {
-    if (s === null) return null;
+    if (s === null) return 'absent';
     // A note on a series alone points at its last value.
     const last = values[s].map((v, i) => (v === null ? -1 : i)).filter((i) => i >= 0).pop();
-    if (last === undefined) return null;
+    if (last === undefined) return 'beside';
     x = last;
   }
-  if (!Number.isFinite(x) || x < 0 || x > data.points.length - 1) return null;
-  if (s !== null && valueAt(values[s], x) === null) return null;
+  if (!Number.isFinite(x) || x < 0 || x > data.points.length - 1) return 'absent';
+  // A note on a series where it has no value: the series is shown, the point is not.
+  if (s !== null && valueAt(values[s], x) === null) return 'beside';
   return { x, s };
 }
 
@@ -209,7 +213,7 @@ interface Ctx {
   bands: readonly Band[];
   opts: LinesOptions;
   theme: Theme;
-  notes: readonly { note: PinnedNote; x: number; s: number | null }[];
+  notes: readonly Placed<Target>[];
   /** A value as written in this chart. */
   fmt: (v: number) => string;
   width: number;
@@ -402,47 +406,18 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(xTitleY + PAD) };
 }
 
-function renderLines(data: LinesData, options: LinesOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = linesOptions.parse(options);
-  const id = chartId('lines', opts.id, data, opts, notes);
-  const values = clean(data);
-  const bands = cleanBands(data);
-  const table = linesTable(data, values, bands);
-  const reason = emptyReason(data, values);
-  if (reason) {
-    return {
-      svg: emptyChart('lines', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('lines', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const targets = notes.map((note) => ({ note, t: noteTarget(note, data, values) }));
-  const drawn = targets.filter((t) => t.t !== null).map((t) => ({ note: t.note, ...t.t! }));
-  const decimals = decimalsFor(values.flat().filter((v): v is number => v !== null));
-  const fmt = (v: number) => formatValue(v, data.format, decimals);
-  const alt = linesAlt(
-    data,
-    values,
-    fmt,
-    drawn.map((d) => d.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawLines({ data, values, bands, opts, theme, notes: drawn, fmt, width, narrow });
-    return frame({ kind: 'lines', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: targets.filter((t) => t.t === null).map((t) => t.note.label),
-  };
-}
-
-export const lines: Chart<LinesData, typeof linesOptions> = {
+export const lines = defineChart({
   name: 'lines',
   options: linesOptions,
-  render: renderLines,
-};
+  prepare: (data: LinesData) => {
+    const values = clean(data);
+    const decimals = decimalsFor(values.flat().filter((v): v is number => v !== null));
+    return { values, bands: cleanBands(data), fmt: (v: number) => formatValue(v, data.format, decimals) };
+  },
+  empty: ({ data, prep }) => emptyReason(data, prep.values),
+  table: ({ data, prep }) => linesTable(data, prep.values, prep.bands),
+  place: (at, { data, prep }) => place(at, data, prep.values),
+  alt: ({ data, prep }) => linesAlt(data, prep.values, prep.fmt),
+  draw: ({ data, prep, opts, theme }, notes, { width, narrow }) =>
+    drawLines({ data, values: prep.values, bands: prep.bands, opts, theme, notes, fmt: prep.fmt, width, narrow }),
+});

@@ -19,11 +19,11 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, MatrixData, PinnedNote, Table } from './types.ts';
-import { defaultTheme } from './theme.ts';
+import type { MatrixData, NoteAt, Table } from './types.ts';
+import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import { equalClasses } from './classes.ts';
@@ -32,7 +32,7 @@ import { lightnessRamp, pickSteps, textOn } from './ramp.ts';
 import { seriate } from './seriate.ts';
 import { thinEvenly } from './place.ts';
 import { notesBelow } from './lanebelow.ts';
-import { markerHeight, markerWidth, noteInline, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline } from './notes.ts';
 
 export const matrixOptions = z.strictObject({
   order: z
@@ -166,7 +166,7 @@ function matrixTable(data: MatrixData, prep: Prepared): Table {
   };
 }
 
-function matrixAlt(data: MatrixData, prep: Prepared, drawn: readonly PinnedNote[]): string {
+function matrixAlt(data: MatrixData, prep: Prepared): string {
   const cells: { r: number; c: number; v: number }[] = [];
   for (const r of prep.rowOrder) for (const c of prep.colOrder) if (prep.values[r][c] !== null) cells.push({ r, c, v: prep.values[r][c]! });
   const max = Math.max(...cells.map((x) => x.v));
@@ -195,32 +195,29 @@ function matrixAlt(data: MatrixData, prep: Prepared, drawn: readonly PinnedNote[
     max === min
       ? `${data.valueLabel}: every cell holds ${prep.fmt(max)}`
       : `${data.valueLabel}: highest ${joinWords(shown)}, ${prep.fmt(max)}${each}; lowest ${prep.fmt(min)}`;
-  const parts = [sentence(main)];
-  if (drawn.length) parts.push(noteSentences(drawn));
-  return parts.join(' ');
+  return sentence(main);
 }
 
 /* ---------- notes ---------- */
 
 /** A note on a row (looked up first) or a column, by id or name. */
 interface Target {
-  note: PinnedNote;
   axis: 'row' | 'column';
   index: number;
 }
 
-function noteTarget(note: PinnedNote, data: MatrixData): Target | null {
-  const at = note.at.category;
-  if (at === undefined) return null;
+function place(note: NoteAt, data: MatrixData): Target | Miss {
+  const at = note.category;
+  if (at === undefined) return 'absent';
   const find = (items: { id: string; name: string }[]) => {
     const byId = items.findIndex((x) => x.id === at);
     return byId >= 0 ? byId : items.findIndex((x) => x.name === at);
   };
   const r = find(data.rows);
-  if (r >= 0) return { note, axis: 'row', index: r };
+  if (r >= 0) return { axis: 'row', index: r };
   const c = find(data.columns);
-  if (c >= 0) return { note, axis: 'column', index: c };
-  return null;
+  if (c >= 0) return { axis: 'column', index: c };
+  return 'absent';
 }
 
 /* ---------- drawing ---------- */
@@ -242,7 +239,7 @@ interface Ctx {
   prep: Prepared;
   opts: MatrixOptions;
   theme: Theme;
-  targets: readonly Target[];
+  targets: readonly Placed<Target>[];
   width: number;
   narrow: boolean;
 }
@@ -487,43 +484,13 @@ function classLegend(ctx: Ctx, top: number): { markup: string; bottom: number } 
   return { markup: el('g', { class: 'vt-legend' }, out), bottom };
 }
 
-function renderMatrix(data: MatrixData, options: MatrixOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = matrixOptions.parse(options);
-  const id = chartId('matrix', opts.id, data, opts, notes);
-  const prep = prepare(data, opts, theme);
-  const table = matrixTable(data, prep);
-  const reason = emptyReason(data, prep);
-  if (reason) {
-    return {
-      svg: emptyChart('matrix', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('matrix', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const all = notes.map((n) => ({ n, t: noteTarget(n, data) }));
-  const targets = all.filter((a) => a.t !== null).map((a) => a.t!);
-  const alt = matrixAlt(
-    data,
-    prep,
-    targets.map((t) => t.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawMatrix({ data, prep, opts, theme, targets, width, narrow });
-    return frame({ kind: 'matrix', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: all.filter((a) => a.t === null).map((a) => a.n.label),
-  };
-}
-
-export const matrix: Chart<MatrixData, typeof matrixOptions> = {
+export const matrix = defineChart({
   name: 'matrix',
   options: matrixOptions,
-  render: renderMatrix,
-};
+  prepare: (data: MatrixData, opts, theme) => prepare(data, opts, theme),
+  empty: ({ data, prep }) => emptyReason(data, prep),
+  table: ({ data, prep }) => matrixTable(data, prep),
+  place: (at, { data }) => place(at, data),
+  alt: ({ data, prep }) => matrixAlt(data, prep),
+  draw: ({ data, prep, opts, theme }, targets, { width, narrow }) => drawMatrix({ data, prep, opts, theme, targets, width, narrow }),
+});

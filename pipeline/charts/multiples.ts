@@ -7,18 +7,18 @@
  */
 
 import { z } from 'zod';
-import type { BarsData, ChartOutput, LinesData, MultiplesData, PinnedNote, Table } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { BarsData, LinesData, MultiplesData, NoteAt, Table } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, polylinePath, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { BOLD_FACTOR } from './clip.ts';
 import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import type { ValueFormat } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { legend } from './legend.ts';
-import { markerWidth, noteInline, noteSentences } from './notes.ts';
+import { markerWidth, noteInline } from './notes.ts';
 
 export const multiplesOptions = z.strictObject({
   columns: z
@@ -143,7 +143,7 @@ function peakWords(k: Peak, fmt: (p: Panel, v: number) => string): string {
   return `${where}, ${fmt(p, k.v)}`;
 }
 
-function multiplesAlt(panels: Panel[], fmt: (p: Panel, v: number) => string, drawn: readonly PinnedNote[]): string {
+function multiplesAlt(panels: Panel[], fmt: (p: Panel, v: number) => string): string {
   const peaks = panels.map(peakOf).filter((k): k is Peak => k !== null);
   const lead = `${valueLabel(panels)}, on one scale across ${panels.length} ${panels.length === 1 ? 'panel' : 'panels'}`;
   const max = Math.max(...peaks.map((k) => k.v));
@@ -160,9 +160,19 @@ function multiplesAlt(panels: Panel[], fmt: (p: Panel, v: number) => string, dra
   if (peaks.length > 1 && max !== min) {
     main += bottom.length === 1 ? `; ${bottom[0].panel.title} has the lowest peak, ${fmt(bottom[0].panel, min)}` : `; the lowest peak is ${fmt(bottom[0].panel, min)}, in ${bottom.length} panels`;
   }
-  const parts = [sentence(main)];
-  if (drawn.length) parts.push(noteSentences(drawn));
-  return parts.join(' ');
+  return sentence(main);
+}
+
+/* ---------- notes ---------- */
+
+/** A note goes on a panel, by the panel's id, as a marker beside its title. */
+interface Target {
+  panel: string;
+}
+
+function place(at: NoteAt, panels: readonly Panel[]): Target | Miss {
+  const id = at.category;
+  return id !== undefined && panels.some((p) => p.id === id) ? { panel: id } : 'absent';
 }
 
 /* ---------- layout ---------- */
@@ -187,7 +197,7 @@ interface Ctx {
   panels: Panel[];
   opts: MultiplesOptions;
   theme: Theme;
-  notes: readonly PinnedNote[];
+  notes: readonly Placed<Target>[];
   colourOf: Map<string, number>;
   seriesNames: string[];
   fmt: (p: Panel, v: number) => string;
@@ -261,7 +271,7 @@ function drawMultiples(ctx: Ctx): { body: string; height: number } {
   // Panel heights: one for all, so lines panels share their vertical scale on the page too.
   // Panel titles: bold, on up to two lines, the same room above every panel.
   const noteRoom = (p: Panel) => {
-    const note = ctx.notes.find((nt) => nt.at.category === p.id);
+    const note = ctx.notes.find((nt) => nt.panel === p.id)?.note;
     return note ? markerWidth(note.label, theme) + 6 : 0;
   };
   const titles = panels.map((p) => wrapText(p.title, (panelW - noteRoom(p)) / BOLD_FACTOR, fs, 2).lines);
@@ -281,7 +291,7 @@ function drawMultiples(ctx: Ctx): { body: string; height: number } {
     const col = k % cols;
     const row = Math.floor(k / cols);
     const g: Geometry = { x: PAD + gutter + col * (panelW + gapX), y: gridTop + row * (panelH + gapY), w: panelW, col };
-    const note = ctx.notes.find((nt) => nt.at.category === p.id);
+    const note = ctx.notes.find((nt) => nt.panel === p.id)?.note;
     const inner: string[] = [titleEl(p.title)];
     titles[k].forEach((line, li) =>
       inner.push(textEl(line, { x: g.x, y: g.y + fs + li * (fs + 3), 'font-weight': 600, class: 'vt-panel-title' })),
@@ -452,50 +462,22 @@ function drawBarsPanel(ctx: Ctx, p: Panel, g: Geometry, top: number, rowH: numbe
   return out.join('');
 }
 
-function renderMultiples(data: MultiplesData, options: MultiplesOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = multiplesOptions.parse(options);
-  const id = chartId('multiples', opts.id, data, opts, notes);
-  const panels = preparePanels(data);
-  const table = multiplesTable(panels);
-  const reason = emptyReason(panels);
-  if (reason) {
-    return {
-      svg: emptyChart('multiples', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('multiples', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  // Values written with the same decimals across panels of a kind.
-  const decimals = {
-    bars: decimalsFor(present(panels, 'bars')),
-    lines: decimalsFor(present(panels, 'lines')),
-  };
-  const fmt = (p: Panel, v: number) => formatValue(v, p.data.format, decimals[p.data.kind]);
-  const ids = new Set(panels.map((p) => p.id));
-  const drawn: PinnedNote[] = [];
-  for (const n of notes) {
-    // One marker per panel: the first note on it.
-    if (n.at.category !== undefined && ids.has(n.at.category) && !drawn.some((d) => d.at.category === n.at.category)) drawn.push(n);
-  }
-  const alt = multiplesAlt(panels, fmt, drawn);
-  const { index, names } = seriesIndex(panels);
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawMultiples({ panels, opts, theme, notes: drawn, colourOf: index, seriesNames: names, fmt, width, narrow });
-    return frame({ kind: 'multiples', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: notes.filter((n) => !drawn.includes(n)).map((n) => n.label),
-  };
-}
-
-export const multiples: Chart<MultiplesData, typeof multiplesOptions> = {
+export const multiples = defineChart({
   name: 'multiples',
   options: multiplesOptions,
-  render: renderMultiples,
-};
+  prepare: (data: MultiplesData) => {
+    const panels = preparePanels(data);
+    // Values written with the same decimals across panels of a kind.
+    const decimals = { bars: decimalsFor(present(panels, 'bars')), lines: decimalsFor(present(panels, 'lines')) };
+    const fmt = (p: Panel, v: number) => formatValue(v, p.data.format, decimals[p.data.kind]);
+    return { panels, fmt, ...seriesIndex(panels) };
+  },
+  empty: ({ prep }) => emptyReason(prep.panels),
+  table: ({ prep }) => multiplesTable(prep.panels),
+  place: (at, { prep }) => place(at, prep.panels),
+  // One marker per panel: the first note on it.
+  slot: (t) => t.panel,
+  alt: ({ prep }) => multiplesAlt(prep.panels, prep.fmt),
+  draw: ({ prep, opts, theme }, notes, { width, narrow }) =>
+    drawMultiples({ panels: prep.panels, opts, theme, notes, colourOf: prep.index, seriesNames: prep.names, fmt: prep.fmt, width, narrow }),
+});

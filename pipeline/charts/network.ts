@@ -22,11 +22,11 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, NetworkData, PinnedNote, Table } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { NetworkData, NoteAt, Table } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { forceLayout } from './force.ts';
@@ -34,7 +34,7 @@ import { placeAll, placeLabel } from './pointlabels.ts';
 import type { Disc, PlaceContext, Rect, Segment } from './pointlabels.ts';
 import { reach, shapeFor, symbol } from './shapes.ts';
 import type { Shape } from './shapes.ts';
-import { markerHeight, markerWidth, noteInline, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline } from './notes.ts';
 
 export const networkOptions = z.strictObject({
   minWeight: z
@@ -164,7 +164,7 @@ function networkTable(data: NetworkData, prep: Prepared): Table {
 const MAX_GROUPS_IN_ALT = 5;
 const MAX_MEMBERS_IN_ALT = 5;
 
-function networkAlt(data: NetworkData, prep: Prepared, drawn: readonly PinnedNote[]): string {
+function networkAlt(data: NetworkData, prep: Prepared): string {
   const ranked = bySizeDesc(prep.nodes);
   const top = ranked.filter((n) => n.size === ranked[0].size);
   const others = prep.nodes.length - 1;
@@ -189,16 +189,17 @@ function networkAlt(data: NetworkData, prep: Prepared, drawn: readonly PinnedNot
     const rest = prep.groups.length - list.length;
     parts.push(sentence(`${prep.groups.length} groups: ${list.join('; ')}${rest > 0 ? `; and ${rest} smaller groups` : ''}`));
   }
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
 }
 
 /* ---------- notes ---------- */
 
-function noteNode(note: PinnedNote, prep: Prepared): Node | null {
-  const at = note.at.category;
-  if (at === undefined) return null;
-  return prep.nodes.find((n) => n.id === at) ?? prep.nodes.find((n) => n.name === at) ?? null;
+/** A note goes beside a node, found by id, then by name. */
+function place(note: NoteAt, prep: Prepared): { node: Node } | Miss {
+  const at = note.category;
+  if (at === undefined) return 'absent';
+  const node = prep.nodes.find((n) => n.id === at) ?? prep.nodes.find((n) => n.name === at);
+  return node ? { node } : 'absent';
 }
 
 /* ---------- drawing ---------- */
@@ -210,7 +211,7 @@ interface Ctx {
   prep: Prepared;
   opts: NetworkOptions;
   theme: Theme;
-  notes: readonly { note: PinnedNote; node: Node }[];
+  notes: readonly Placed<{ node: Node }>[];
   width: number;
   narrow: boolean;
 }
@@ -420,43 +421,13 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(captionY + PAD) };
 }
 
-function renderNetwork(data: NetworkData, options: NetworkOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = networkOptions.parse(options);
-  const id = chartId('network', opts.id, data, opts, notes);
-  const prep = prepare(data);
-  const table = networkTable(data, prep);
-  if (prep.nodes.length === 0) {
-    const reason = 'the dataset has no nodes.';
-    return {
-      svg: emptyChart('network', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('network', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const targets = notes.map((note) => ({ note, node: noteNode(note, prep) }));
-  const drawn = targets.filter((t): t is { note: PinnedNote; node: Node } => t.node !== null);
-  const alt = networkAlt(
-    data,
-    prep,
-    drawn.map((d) => d.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawNetwork({ data, prep, opts, theme, notes: drawn, width, narrow });
-    return frame({ kind: 'network', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: targets.filter((t) => t.node === null).map((t) => t.note.label),
-  };
-}
-
-export const network: Chart<NetworkData, typeof networkOptions> = {
+export const network = defineChart({
   name: 'network',
   options: networkOptions,
-  render: renderNetwork,
-};
+  prepare: (data: NetworkData) => prepare(data),
+  empty: ({ prep }) => (prep.nodes.length === 0 ? 'the dataset has no nodes.' : null),
+  table: ({ data, prep }) => networkTable(data, prep),
+  place: (at, { prep }) => place(at, prep),
+  alt: ({ data, prep }) => networkAlt(data, prep),
+  draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => drawNetwork({ data, prep, opts, theme, notes, width, narrow }),
+});

@@ -9,7 +9,7 @@
 import type { PinnedNote } from './types.ts';
 import type { Theme } from './theme.ts';
 import { el, num, textEl, textWidth, titleEl } from './svg.ts';
-import { serifStyle } from './chart.ts';
+import { serifStyle } from './theme.ts';
 import { sentence } from './format.ts';
 import { spreadApart } from './place.ts';
 

@@ -6,11 +6,11 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, PinnedNote, ScatterData, Table } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { NoteAt, ScatterData, Table } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
@@ -18,7 +18,7 @@ import { thinEvenly } from './place.ts';
 import { placeLabels } from './labels2d.ts';
 import { clipEnd } from './clip.ts';
 import type { Box, Disc, LabelRequest } from './labels2d.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const scatterOptions = z.strictObject({
@@ -53,6 +53,9 @@ interface Prepared {
   points: Point[];
   /** Group names in order of first appearance; empty when no point has a group. */
   groups: string[];
+  /** Values as written on each axis (decimals kept equal along it). */
+  fx: (v: number) => string;
+  fy: (v: number) => string;
 }
 
 const UNGROUPED = 'Other';
@@ -70,7 +73,9 @@ function prepare(data: ScatterData): Prepared {
     }
     return { index, id: p.id, label: p.label, x: p.x, y: p.y, group };
   });
-  return { points, groups };
+  const dx = decimalsFor(points.map((p) => p.x));
+  const dy = decimalsFor(points.map((p) => p.y));
+  return { points, groups, fx: (v) => formatNumber(v, dx), fy: (v) => formatNumber(v, dy) };
 }
 
 /* ---------- table and alt text ---------- */
@@ -105,7 +110,7 @@ function axisSentence(label: string, points: Point[], get: (p: Point) => number,
   return sentence(`${label}: highest ${names(top)} (${fmt(max)}), lowest ${names(bottom)} (${fmt(min)})`);
 }
 
-function scatterAlt(data: ScatterData, prep: Prepared, fx: (v: number) => string, fy: (v: number) => string, drawn: readonly PinnedNote[]): string {
+function scatterAlt(data: ScatterData, prep: Prepared, fx: (v: number) => string, fy: (v: number) => string): string {
   const n = prep.points.length;
   const parts = [
     `${formatNumber(n, 0)} ${n === 1 ? 'point' : 'points'}${prep.groups.length > 1 ? ` in ${prep.groups.length} groups` : ''}.`,
@@ -114,8 +119,16 @@ function scatterAlt(data: ScatterData, prep: Prepared, fx: (v: number) => string
   ];
   const skipped = data.points.length - n;
   if (skipped > 0) parts.push(`${formatNumber(skipped, 0)} ${skipped === 1 ? 'point lacks' : 'points lack'} a value and ${skipped === 1 ? 'is' : 'are'} left out.`);
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
+}
+
+/* ---------- notes ---------- */
+
+/** A note points at a point by its id, or failing that its label. */
+function place(at: NoteAt, prep: Prepared): { point: Point } | Miss {
+  const c = at.category;
+  const point = c === undefined ? undefined : (prep.points.find((p) => p.id === c) ?? prep.points.find((p) => p.label === c));
+  return point ? { point } : 'absent';
 }
 
 /* ---------- which points to name ---------- */
@@ -204,7 +217,7 @@ interface Ctx {
   prep: Prepared;
   opts: ScatterOptions;
   theme: Theme;
-  notes: readonly { note: PinnedNote; point: Point }[];
+  notes: readonly Placed<{ point: Point }>[];
   fx: (v: number) => string;
   fy: (v: number) => string;
   width: number;
@@ -398,58 +411,18 @@ function leaderLine(d: Disc, to: { x: number; y: number }, theme: Theme): string
   });
 }
 
-function renderScatter(data: ScatterData, options: ScatterOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = scatterOptions.parse(options);
-  const id = chartId('scatter', opts.id, data, opts, notes);
-  const prep = prepare(data);
-  const table = scatterTable(data, prep);
-  if (prep.points.length === 0) {
-    const reason = data.points.length === 0 ? 'the dataset has no points.' : 'no point has both of its values.';
-    return {
-      svg: emptyChart('scatter', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('scatter', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  // A note points at a point by its id, or failing that its label.
-  const targets = notes.map((note) => {
-    const c = note.at.category;
-    const point = c === undefined ? undefined : (prep.points.find((p) => p.id === c) ?? prep.points.find((p) => p.label === c));
-    return { note, point };
-  });
-  const drawn = targets.filter((t): t is { note: PinnedNote; point: Point } => t.point !== undefined);
-  const dx = decimalsFor(prep.points.map((p) => p.x));
-  const dy = decimalsFor(prep.points.map((p) => p.y));
-  const fx = (v: number) => formatNumber(v, dx);
-  const fy = (v: number) => formatNumber(v, dy);
-  const alt = scatterAlt(
-    data,
-    prep,
-    fx,
-    fy,
-    drawn.map((d) => d.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const ctx: Ctx = { data, prep, opts, theme, notes: drawn, fx, fy, width, narrow };
-    // Notes beside their points when they all fit there; a lane above the plot for those that do not.
-    let out = drawScatter(ctx, false);
-    if (out.unplaced > 0) out = drawScatter(ctx, true);
-    const { body, height } = out;
-    return frame({ kind: 'scatter', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: targets.filter((t) => t.point === undefined).map((t) => t.note.label),
-  };
-}
-
-export const scatter: Chart<ScatterData, typeof scatterOptions> = {
+export const scatter = defineChart({
   name: 'scatter',
   options: scatterOptions,
-  render: renderScatter,
-};
+  prepare: (data: ScatterData) => prepare(data),
+  empty: ({ data, prep }) => (prep.points.length > 0 ? null : data.points.length === 0 ? 'the dataset has no points.' : 'no point has both of its values.'),
+  table: ({ data, prep }) => scatterTable(data, prep),
+  place: (at, { prep }) => place(at, prep),
+  alt: ({ data, prep }) => scatterAlt(data, prep, prep.fx, prep.fy),
+  draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => {
+    const ctx: Ctx = { data, prep, opts, theme, notes, fx: prep.fx, fy: prep.fy, width, narrow };
+    // Notes beside their points when they all fit there; a lane above the plot for those that do not.
+    const out = drawScatter(ctx, false);
+    return out.unplaced > 0 ? drawScatter(ctx, true) : out;
+  },
+});

@@ -4,15 +4,15 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, PinnedNote, StripData, Table } from './types.ts';
-import { defaultTheme } from './theme.ts';
+import type { NoteAt, StripData, Table } from './types.ts';
+import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { thinEvenly, thinGreedy } from './place.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const stripOptions = z.strictObject({
@@ -88,7 +88,7 @@ function spread(r: Row, withText: boolean): string {
   return `${times}, ${where}${withText ? ' of the text' : ''}`;
 }
 
-function stripAlt(rows: Row[], drawn: readonly PinnedNote[]): string {
+function stripAlt(rows: Row[]): string {
   const counts = rows.map((r) => r.positions.length);
   const max = Math.max(...counts);
   const min = Math.min(...counts);
@@ -103,30 +103,28 @@ function stripAlt(rows: Row[], drawn: readonly PinnedNote[]): string {
     const least = bottom.length === 1 ? `${bottom[0].name} least often, ${spread(bottom[0], false)}` : `${names(bottom)} least often, ${min === 0 ? 'not at all' : `${formatNumber(min, 0)} times each`}`;
     main = `${mostLead}; ${least}`;
   }
-  const parts = [sentence(main)];
-  if (drawn.length) parts.push(noteSentences(drawn));
-  return parts.join(' ');
+  return sentence(main);
 }
 
 /* ---------- notes ---------- */
 
+/** A note on a row (by id, then name), at a position 0..1, or both. */
 interface Target {
-  note: PinnedNote;
   row: number | null;
   x: number | null;
 }
 
-function noteTarget(note: PinnedNote, rows: Row[]): Target | null {
+function place(at: NoteAt, rows: Row[]): Target | Miss {
   let row: number | null = null;
-  if (note.at.category !== undefined) {
-    row = rows.findIndex((r) => r.id === note.at.category);
-    if (row === -1) row = rows.findIndex((r) => r.name === note.at.category);
-    if (row === -1) return null;
+  if (at.category !== undefined) {
+    row = rows.findIndex((r) => r.id === at.category);
+    if (row === -1) row = rows.findIndex((r) => r.name === at.category);
+    if (row === -1) return 'absent';
   }
-  const x = note.at.x ?? null;
-  if (x !== null && (!Number.isFinite(x) || x < 0 || x > 1)) return null;
-  if (row === null && x === null) return null;
-  return { note, row, x };
+  const x = at.x ?? null;
+  if (x !== null && (!Number.isFinite(x) || x < 0 || x > 1)) return 'absent';
+  if (row === null && x === null) return 'absent';
+  return { row, x };
 }
 
 /* ---------- drawing ---------- */
@@ -138,7 +136,7 @@ interface Ctx {
   rows: Row[];
   opts: StripOptions;
   theme: Theme;
-  targets: readonly Target[];
+  targets: readonly Placed<Target>[];
   width: number;
   narrow: boolean;
 }
@@ -272,42 +270,13 @@ function drawStrip(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(titleY + PAD) };
 }
 
-function renderStrip(data: StripData, options: StripOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = stripOptions.parse(options);
-  const id = chartId('strip', opts.id, data, opts, notes);
-  const rows = clean(data);
-  const table = stripTable(data, rows);
-  const reason = emptyReason(rows);
-  if (reason) {
-    return {
-      svg: emptyChart('strip', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('strip', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const all = notes.map((n) => ({ n, t: noteTarget(n, rows) }));
-  const targets = all.filter((a) => a.t !== null).map((a) => a.t!);
-  const alt = stripAlt(
-    rows,
-    targets.map((t) => t.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawStrip({ data, rows, opts, theme, targets, width, narrow });
-    return frame({ kind: 'strip', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: all.filter((a) => a.t === null).map((a) => a.n.label),
-  };
-}
-
-export const strip: Chart<StripData, typeof stripOptions> = {
+export const strip = defineChart({
   name: 'strip',
   options: stripOptions,
-  render: renderStrip,
-};
+  prepare: (data: StripData) => clean(data),
+  empty: ({ prep }) => emptyReason(prep),
+  table: ({ data, prep }) => stripTable(data, prep),
+  place: (at, { prep }) => place(at, prep),
+  alt: ({ prep }) => stripAlt(prep),
+  draw: ({ data, prep, opts, theme }, targets, { width, narrow }) => drawStrip({ data, rows: prep, opts, theme, targets, width, narrow }),
+});

@@ -7,11 +7,11 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, PinnedNote, Table, TextmapData } from './types.ts';
-import { defaultTheme } from './theme.ts';
+import type { NoteAt, PinnedNote, Table, TextmapData } from './types.ts';
+import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { BOLD_FACTOR, collapseSpace } from './clip.ts';
@@ -19,7 +19,7 @@ import { valueScale } from './diverging.ts';
 import type { ValueScale } from './diverging.ts';
 import { flowLines } from './flow.ts';
 import type { FlowItem } from './flow.ts';
-import { markerHeight, markerWidth, noteInline, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline } from './notes.ts';
 
 export const textmapOptions = z.strictObject({
   encode: z
@@ -86,8 +86,13 @@ interface Pieces {
   spansSet: number;
 }
 
+/** A note points at a span by its index (at.x); it is drawn when that span is set in full. */
+interface Target {
+  span: number;
+}
+
 /** The text cut into pieces at white space, up to `maxWords` words, with note markers after their spans. */
-function pieces(spans: Span[], maxWords: number, notes: readonly PinnedNote[]): Pieces {
+function pieces(spans: Span[], maxWords: number, notes: readonly Placed<Target>[]): Pieces {
   const atoms: Atom[] = [];
   let words = 0;
   let total = 0;
@@ -130,7 +135,7 @@ function pieces(spans: Span[], maxWords: number, notes: readonly PinnedNote[]): 
       space = false;
       firstOfSpan = false;
     }
-    if (!cut) for (const note of notes.filter((n) => n.at.x === i)) atoms.push({ kind: 'note', note, span: i });
+    if (!cut) for (const n of notes.filter((t) => t.span === i)) atoms.push({ kind: 'note', note: n.note, span: i });
   });
   if (cut) atoms.push({ kind: 'more' });
   return { atoms, wordsSet: words, wordsTotal: total, spansSet };
@@ -160,7 +165,7 @@ function namedSpans(spans: Span[]): string {
   return distinct.length > 3 ? `${joinWords(distinct.slice(0, 3).map(quoted))} and ${distinct.length - 3} more` : joinWords(distinct.map(quoted));
 }
 
-function textmapAlt(data: TextmapData, spans: Span[], p: Pieces, scale: ValueScale, fmt: (v: number) => string, drawn: readonly PinnedNote[]): string {
+function textmapAlt(data: TextmapData, spans: Span[], p: Pieces, scale: ValueScale, fmt: (v: number) => string): string {
   const valued = spans.filter((s) => s.value !== null);
   const words = (n: number) => `${formatNumber(n, 0)} ${n === 1 ? 'word' : 'words'}`;
   let main: string;
@@ -179,8 +184,15 @@ function textmapAlt(data: TextmapData, spans: Span[], p: Pieces, scale: ValueSca
   }
   const parts = [sentence(main)];
   if (p.wordsSet < p.wordsTotal) parts.push(`The panel sets the first ${words(p.wordsSet)} of ${formatNumber(p.wordsTotal, 0)}; the table lists every span with a value.`);
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
+}
+
+/* ---------- notes ---------- */
+
+function place(at: NoteAt, spans: readonly Span[], spansSet: number): Target | Miss {
+  const x = at.x;
+  if (x === undefined || !Number.isInteger(x) || x < 0 || x >= spans.length) return 'absent';
+  return x < spansSet ? { span: x } : 'beside';
 }
 
 /* ---------- drawing ---------- */
@@ -359,45 +371,26 @@ function drawTextmap(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(y + PAD) };
 }
 
-function renderTextmap(data: TextmapData, options: TextmapOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = textmapOptions.parse(options);
-  const id = chartId('textmap', opts.id, data, opts, notes);
-  const spans = clean(data);
-  const table = textmapTable(data, spans);
-  if (spans.every((s) => s.text.trim() === '')) {
-    const reason = 'the dataset has no text.';
-    return {
-      svg: emptyChart('textmap', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('textmap', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  // A note points at a span by its index (at.x); it is drawn when that span is set in full.
-  const firstCut = pieces(spans, opts.maxWords, []);
-  const drawn = notes.filter((n) => n.at.x !== undefined && Number.isInteger(n.at.x) && n.at.x >= 0 && n.at.x < firstCut.spansSet);
-  const p = pieces(spans, opts.maxWords, drawn);
-  const values = spans.flatMap((s) => (s.value === null ? [] : [s.value]));
-  const scale = valueScale(domainOf(data, values), theme);
-  const decimals = decimalsFor([...values, ...scale.domain]);
-  const fmt = (v: number) => formatNumber(v, decimals);
-  const alt = textmapAlt(data, spans, p, scale, fmt, drawn);
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawTextmap({ data, spans, pieces: p, opts, scale, fmt, theme, width, narrow });
-    return frame({ kind: 'textmap', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: notes.filter((n) => !drawn.includes(n)).map((n) => n.label),
-  };
-}
-
-export const textmap: Chart<TextmapData, typeof textmapOptions> = {
+export const textmap = defineChart({
   name: 'textmap',
   options: textmapOptions,
-  render: renderTextmap,
-};
+  prepare: (data: TextmapData, opts, theme) => {
+    const spans = clean(data);
+    const values = spans.flatMap((s) => (s.value === null ? [] : [s.value]));
+    const scale = valueScale(domainOf(data, values), theme);
+    const decimals = decimalsFor([...values, ...scale.domain]);
+    // The pieces with the notes drawn, made once for the alt text and both layouts.
+    const set = new WeakMap<readonly Placed<Target>[], Pieces>();
+    const piecesWith = (notes: readonly Placed<Target>[]): Pieces => {
+      if (!set.has(notes)) set.set(notes, pieces(spans, opts.maxWords, notes));
+      return set.get(notes)!;
+    };
+    return { spans, spansSet: piecesWith([]).spansSet, piecesWith, scale, fmt: (v: number) => formatNumber(v, decimals) };
+  },
+  empty: ({ prep }) => (prep.spans.every((s) => s.text.trim() === '') ? 'the dataset has no text.' : null),
+  table: ({ data, prep }) => textmapTable(data, prep.spans),
+  place: (at, { prep }) => place(at, prep.spans, prep.spansSet),
+  alt: ({ data, prep }, notes) => textmapAlt(data, prep.spans, prep.piecesWith(notes), prep.scale, prep.fmt),
+  draw: ({ data, opts, theme, prep }, notes, { width, narrow }) =>
+    drawTextmap({ data, spans: prep.spans, pieces: prep.piecesWith(notes), opts, scale: prep.scale, fmt: prep.fmt, theme, width, narrow }),
+});

@@ -95,6 +95,11 @@ export const defaultTheme: Theme = deepFreeze({
   widths: { wide: 720, narrow: 360 },
 });
 
+/** Style attribute for serif text (axis titles, notes, messages). */
+export function serifStyle(theme: Theme, italic = false): string {
+  return `font-family:${theme.fonts.serif}${italic ? ';font-style:italic' : ''}`;
+}
+
 /** The colour of series `i`, cycling through the palette. */
 export function seriesColour(theme: Theme, i: number): SeriesColour {
   return theme.series[i % theme.series.length];

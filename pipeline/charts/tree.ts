@@ -24,11 +24,11 @@
 import { z } from 'zod';
 import { hierarchy, tree as tidyTree } from 'd3-hierarchy';
 import type { HierarchyPointNode } from 'd3-hierarchy';
-import type { ChartOutput, PinnedNote, Table, TreeData, TreeNode } from './types.ts';
-import { defaultTheme } from './theme.ts';
+import type { Table, TreeData, TreeNode } from './types.ts';
+import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 
@@ -344,43 +344,22 @@ function drawTree(ctx: Ctx): { body: string; height: number; words: number } {
   return { body: body.join(''), height: Math.ceil(y), words: fit.laid.length - 1 };
 }
 
-function renderTree(data: TreeData, options: TreeOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = treeOptions.parse(options);
-  const id = chartId('tree', opts.id, data, opts, notes);
-  const root = prune(data.root ?? { word: '', count: 0, children: [] }, opts);
-  const table = treeTable(data, root);
-  const skippedNotes = notes.map((n) => n.label);
-  if (root.children.length === 0) {
-    const anyChildren = (data.root?.children ?? []).length > 0;
-    const reason = anyChildren
-      ? `no continuation of ${quote(root.word)} occurs at least ${opts.minCount} times.`
-      : `nothing ${data.direction === 'right' ? 'follows' : 'precedes'} ${quote(root.word)} in the text.`;
-    return {
-      svg: emptyChart('tree', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('tree', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes,
-    };
-  }
-  const chosen = select(root, opts);
-  const total = allBranches(root).length - 1;
-  const draw = (width: number, narrow: boolean, svgId: string, alt: string) => {
-    const { body, height } = drawTree({ data, root, chosen, theme, width, narrow });
-    return frame({ kind: 'tree', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  const alt = treeAlt(data, root, chosen.size - 1, total);
-  return {
-    svg: draw(theme.widths.wide, false, id, alt),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`, alt),
-    alt,
-    table,
-    skippedNotes,
-  };
-}
-
-export const tree: Chart<TreeData, typeof treeOptions> = {
+export const tree = defineChart({
   name: 'tree',
   options: treeOptions,
-  render: renderTree,
-};
+  prepare: (data: TreeData, opts) => {
+    const root = prune(data.root ?? { word: '', count: 0, children: [] }, opts);
+    return { root, chosen: select(root, opts), total: allBranches(root).length - 1 };
+  },
+  empty: ({ data, opts, prep: { root } }) => {
+    if (root.children.length > 0) return null;
+    return (data.root?.children ?? []).length > 0
+      ? `no continuation of ${quote(root.word)} occurs at least ${opts.minCount} times.`
+      : `nothing ${data.direction === 'right' ? 'follows' : 'precedes'} ${quote(root.word)} in the text.`;
+  },
+  table: ({ data, prep }) => treeTable(data, prep.root),
+  // The tree has no marks for notes: every note goes beside it.
+  place: (): Miss => 'beside',
+  alt: ({ data, prep }) => treeAlt(data, prep.root, prep.chosen.size - 1, prep.total),
+  draw: ({ data, prep, theme }, _notes, { width, narrow }) => drawTree({ data, root: prep.root, chosen: prep.chosen, theme, width, narrow }),
+});

@@ -21,15 +21,15 @@
 import { z } from 'zod';
 import { hierarchy, treemap as layoutTreemap, treemapSquarify } from 'd3-hierarchy';
 import type { HierarchyRectangularNode } from 'd3-hierarchy';
-import type { ChartOutput, PinnedNote, Table, TreemapData } from './types.ts';
-import { defaultTheme, seriesColour } from './theme.ts';
+import type { NoteAt, Table, TreemapData } from './types.ts';
+import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
-import type { Chart } from './chart.ts';
-import { chartId, emptyChart, frame, idOption, serifStyle } from './chart.ts';
+import type { Miss, Placed } from './chart.ts';
+import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { atLightness } from './ramp.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane, noteSentences } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 import { notesBelow } from './lanebelow.ts';
 
@@ -143,7 +143,7 @@ function treemapTable(data: TreemapData, prep: Prepared): Table {
   };
 }
 
-function treemapAlt(data: TreemapData, prep: Prepared, drawn: readonly PinnedNote[]): string {
+function treemapAlt(data: TreemapData, prep: Prepared): string {
   const max = prep.items[0].value;
   const top = prep.items.filter((i) => i.value === max);
   const share = formatPercent(max / prep.total);
@@ -157,16 +157,17 @@ function treemapAlt(data: TreemapData, prep: Prepared, drawn: readonly PinnedNot
     const g = prep.groups[0];
     parts.push(sentence(`The largest group is ${g.name || 'the ungrouped items'}, ${prep.fmt(g.total)} (${formatPercent(g.total / prep.total)})`));
   }
-  if (drawn.length) parts.push(noteSentences(drawn));
   return parts.join(' ');
 }
 
 /* ---------- notes ---------- */
 
-function noteCell(note: PinnedNote, prep: Prepared): Cell | null {
-  const at = note.at.category;
-  if (at === undefined) return null;
-  return prep.cells.find((c) => c.members.some((m) => m.id === at)) ?? prep.cells.find((c) => c.members.some((m) => m.label === at)) ?? null;
+/** A note goes on the rectangle that holds its item (by id, then label); several small items may share one. */
+function place(note: NoteAt, prep: Prepared): { cell: Cell } | Miss {
+  const at = note.category;
+  if (at === undefined) return 'absent';
+  const cell = prep.cells.find((c) => c.members.some((m) => m.id === at)) ?? prep.cells.find((c) => c.members.some((m) => m.label === at));
+  return cell ? { cell } : 'absent';
 }
 
 /* ---------- drawing ---------- */
@@ -184,7 +185,7 @@ interface Ctx {
   prep: Prepared;
   opts: TreemapOptions;
   theme: Theme;
-  notes: readonly { note: PinnedNote; cell: Cell }[];
+  notes: readonly Placed<{ cell: Cell }>[];
   width: number;
   narrow: boolean;
 }
@@ -342,43 +343,14 @@ function drawTreemap(ctx: Ctx): { body: string; height: number } {
   return { body: parts.join(''), height: Math.ceil(bottom + 8 + caption.lines.length * (theme.sizes.axisTitle + 4) + PAD) };
 }
 
-function renderTreemap(data: TreemapData, options: TreemapOptionsInput = {}, theme: Theme = defaultTheme, notes: readonly PinnedNote[] = []): ChartOutput {
-  const opts = treemapOptions.parse(options);
-  const id = chartId('treemap', opts.id, data, opts, notes);
-  const prep = prepare(data, opts);
-  const table = treemapTable(data, prep);
-  if (prep.items.length === 0) {
-    const reason = data.items.length === 0 ? 'the dataset has no items.' : 'every value is zero, negative or missing.';
-    return {
-      svg: emptyChart('treemap', id, data.title, reason, theme, theme.widths.wide),
-      svgNarrow: emptyChart('treemap', `${id}-n`, data.title, reason, theme, theme.widths.narrow),
-      alt: `No data to draw: ${reason}`,
-      table,
-      skippedNotes: notes.map((n) => n.label),
-    };
-  }
-  const targets = notes.map((note) => ({ note, cell: noteCell(note, prep) }));
-  const drawn = targets.filter((t): t is { note: PinnedNote; cell: Cell } => t.cell !== null);
-  const alt = treemapAlt(
-    data,
-    prep,
-    drawn.map((d) => d.note),
-  );
-  const draw = (width: number, narrow: boolean, svgId: string) => {
-    const { body, height } = drawTreemap({ data, prep, opts, theme, notes: drawn, width, narrow });
-    return frame({ kind: 'treemap', id: svgId, width, height, title: data.title, desc: alt, theme, body });
-  };
-  return {
-    svg: draw(theme.widths.wide, false, id),
-    svgNarrow: draw(theme.widths.narrow, true, `${id}-n`),
-    alt,
-    table,
-    skippedNotes: targets.filter((t) => t.cell === null).map((t) => t.note.label),
-  };
-}
-
-export const treemap: Chart<TreemapData, typeof treemapOptions> = {
+export const treemap = defineChart({
   name: 'treemap',
   options: treemapOptions,
-  render: renderTreemap,
-};
+  prepare: (data: TreemapData, opts) => prepare(data, opts),
+  empty: ({ data, prep }) =>
+    prep.items.length > 0 ? null : data.items.length === 0 ? 'the dataset has no items.' : 'every value is zero, negative or missing.',
+  table: ({ data, prep }) => treemapTable(data, prep),
+  place: (at, { prep }) => place(at, prep),
+  alt: ({ data, prep }) => treemapAlt(data, prep),
+  draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => drawTreemap({ data, prep, opts, theme, notes, width, narrow }),
+});

@@ -15,20 +15,35 @@ export interface Table {
   rows: (string | number | null)[][];
 }
 
-/** A curator's note pinned to the data, already resolved by the pipeline. */
+/**
+ * What a note points at, in the dataset's own terms. Each kind's `place`
+ * resolves it (see chart.ts); keys a kind does not use leave the note
+ * beside the chart.
+ */
+export interface NoteAt {
+  /** A category of a bars dataset (its `categories[i]`), a row of a strip or matrix, a node, point, item or panel, by id or name. */
+  category?: string;
+  /** A position on the x axis of a lines/strip dataset, in its own units (segment index, or 0..1 for a strip); a line or span index of a concordance or text map. */
+  x?: number;
+  /** A series id (lines) to attach the note to. */
+  series?: string;
+}
+
+/** A curator's note pinned to the data. */
 export interface PinnedNote {
   /** Short label drawn in the chart ("1", "2", …) and repeated beside it. */
   label: string;
   text: string;
-  /** What the note points at, in the dataset's own terms. */
-  at: {
-    /** A category of a bars dataset (its `categories[i]`), or a row of a strip. */
-    category?: string;
-    /** A position on the x axis of a lines/strip dataset, in its own units (segment index, or 0..1 for a strip). */
-    x?: number;
-    /** A series id (lines) to attach the note to. */
-    series?: string;
-  };
+  at: NoteAt;
+}
+
+/** What became of one note: drawn, or why not, and the chart's words for its target when it has them. */
+export interface NoteOutcome {
+  label: string;
+  /** "drawn"; "beside": the chart shows the target but has no place for the note; "absent": the chart does not show the target. */
+  placed: 'drawn' | 'beside' | 'absent';
+  /** The chart's own words for the target ("Segment 3 (words 1201–1800)"), when it has them. */
+  words?: string;
 }
 
 /** Bars: one bar per category per series. */
@@ -179,15 +194,21 @@ export type ChartData =
   | TreemapData;
 
 export interface ChartOutput {
+  /** The wide layout (720 units). */
   svg: string;
-  /** One or two sentences stating the main finding in words. */
-  alt: string;
-  table: Table;
   /**
    * The same chart laid out for a narrow viewBox (360 units wide, for phones);
    * its ids differ from `svg`'s so both can sit on one page.
    */
-  svgNarrow?: string;
-  /** Labels of the notes that were not drawn because their target is not in the data. */
-  skippedNotes?: string[];
+  svgNarrow: string;
+  /** The SVG's description: `summary`, then a sentence for each note drawn. */
+  alt: string;
+  /** One or two sentences stating the main finding in words, without the notes. */
+  summary: string;
+  /** The values the chart draws. */
+  table: Table;
+  /** One entry per note given, in order. */
+  notes: NoteOutcome[];
+  /** Labels of the notes that were not drawn (every outcome but "drawn"). */
+  skippedNotes: string[];
 }
