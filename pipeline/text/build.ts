@@ -9,7 +9,7 @@
  */
 
 import { createHash } from 'node:crypto';
-import type { Chapter, TextModel, TextOptions, TextRange, TextWarning } from './model.ts';
+import type { Chapter, HeadingReport, Part, TextModel, TextOptions, TextRange, TextWarning, TrimmedLines } from './model.ts';
 import { TOKEN_FLAGS } from './model.ts';
 import { u32Buffer } from './columns.ts';
 import { normalise } from './normalise.ts';
@@ -47,8 +47,21 @@ export function buildTextModel(source: string, options: TextOptions): TextModel 
   const sourceOffset = (o: number): number => norm.sourceOffset(clamp(o) + base);
   const position = (o: number): { line: number; column: number } => norm.position(clamp(o) + base);
 
+  const lastLine = norm.position(Math.max(0, norm.text.length - 1)).line;
+  const trimmed: { front?: TrimmedLines; back?: TrimmedLines } = {};
+  if (trim.front && trim.front.end > 0) {
+    trimmed.front = { from: 1, to: norm.position(trim.front.end - 1).line, marker: trim.front.marker, automatic: trim.front.automatic };
+  }
+  if (trim.back) {
+    trimmed.back = { from: norm.position(trim.back.start).line, to: lastLine, marker: trim.back.marker, automatic: trim.back.automatic };
+  }
+
   const pattern = compilePattern(options.chapterPattern, options.id, warnings);
-  const { units, patternMatches } = findStructure(text, { chapterPattern: pattern });
+  const { units, patternMatches, taken, rejected } = findStructure(text, { chapterPattern: pattern });
+  const headings: HeadingReport = {
+    taken: taken.map((h) => ({ line: position(h.at).line, text: h.text, title: h.title, level: h.level })),
+    rejected: rejected.map((r) => ({ line: position(r.at).line, text: r.text, reason: r.reason })),
+  };
   const hasChapters = units.some((u) => u.t === 'heading' && u.kind === 'chapter');
   if (pattern && patternMatches === 0) {
     warnings.push(wording('text/chapter-pattern-unmatched', { id: options.id, pattern: options.chapterPattern!, parts: hasChapters }));
@@ -58,10 +71,10 @@ export function buildTextModel(source: string, options: TextOptions): TextModel 
   if (model.tokens.count === 0) {
     warnings.push(wording('text/empty', { id: options.id, markers: !!(options.start || options.end) }));
   }
-  return { id: options.id, hash, text, ...model, sourceOffset, position, warnings };
+  return { id: options.id, hash, text, ...model, sourceOffset, position, warnings, headings, trimmed };
 }
 
-type Assembled = Pick<TextModel, 'chapters' | 'paragraphs' | 'sentences' | 'tokens' | 'vocab' | 'skipped'>;
+type Assembled = Pick<TextModel, 'chapters' | 'paragraphs' | 'sentences' | 'tokens' | 'vocab' | 'skipped' | 'parts'>;
 
 /** Token columns filled in place: one capacity check per token, trimmed at the end. */
 function tokenStore(capacity: number) {
@@ -131,10 +144,14 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
   const pendingSentences: number[] = [];
 
   let current: Chapter | null = null;
-  let part: string | null = null;
+  const parts: Part[] = [];
+  /** The part the next chapter belongs to (null outside parts). */
+  let part: Part | null = null;
 
-  const open = (title: string, heading: string | null, line: number, at: number): Chapter => ({
-    index: chapters.length, title, heading, part, line, start: at, end: at,
+  const open = (title: string, heading: string | null, line: number, at: number, inPart: Part | null): Chapter => ({
+    index: chapters.length, title, heading, part: inPart ? inPart.title : null,
+    partIndex: inPart ? inPart.index : null, numberInPart: inPart ? inPart.chapterCount + 1 : null,
+    line, start: at, end: at,
     firstParagraph: p.start.length, paragraphCount: 0,
     firstSentence: s.start.length, sentenceCount: 0,
     firstToken: t.count, tokenCount: 0,
@@ -149,6 +166,7 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
       current.end = p.end.get(p.start.length - 1);
     }
     chapters.push(current);
+    if (current.partIndex !== null) parts[current.partIndex]!.chapterCount++;
     current = null;
   };
 
@@ -201,7 +219,7 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
   };
   if (!hasChapters) {
     const firstPara = units.find((u) => u.t === 'para');
-    current = open(WHOLE_TEXT_TITLE, null, firstPara ? position(firstPara.start).line : 1, 0);
+    current = open(WHOLE_TEXT_TITLE, null, firstPara ? position(firstPara.start).line : 1, 0, null);
   }
   const outside: Array<TextRange & { lastUnit: number }> = [];
   for (let ui = 0; ui < units.length; ui++) {
@@ -209,10 +227,18 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
     if (u.t === 'heading') {
       close();
       if (u.kind === 'part') {
-        part = u.title;
+        part = { index: parts.length, title: u.title, heading: u.heading, line: position(u.start).line, firstChapter: chapters.length, chapterCount: 0 };
+        parts.push(part);
       } else {
-        current = open(u.title, u.heading, position(u.start).line, u.end);
+        // A prologue, epilogue or interlude stands outside the parts; the next numbered chapter returns to the open part.
+        current = open(u.title, u.heading, position(u.start).line, u.end, u.extra ? null : part);
+        if (part && !u.extra && part.chapterCount === 0) part.firstChapter = chapters.length;
       }
+      continue;
+    }
+    if (u.t === 'matter') {
+      close();
+      outside.push({ start: u.start, end: u.end, line: position(u.start).line, lastUnit: ui });
       continue;
     }
     if (current) {
@@ -239,5 +265,6 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
     tokens: t.columns(),
     vocab,
     skipped: outside.map(({ start, end, line }) => ({ start, end, line })),
+    parts,
   };
 }

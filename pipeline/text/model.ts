@@ -14,8 +14,12 @@ export interface Chapter {
   title: string;
   /** The heading line exactly as it stands in the text, or null for an implicit chapter (a text with no headings). */
   heading: string | null;
-  /** The enclosing BOOK/PART heading, if any. */
+  /** The enclosing BOOK/PART/VOLUME heading's display title, if any. */
   part: string | null;
+  /** Index of the enclosing part in `parts`, or null (no parts, or a prologue, epilogue or interlude outside them). */
+  partIndex: number | null;
+  /** 1-based position of the chapter within its part, or null outside parts. */
+  numberInPart: number | null;
   /** 1-based line in the source file of the heading (or of the first paragraph). */
   line: number;
   /** Character range of the chapter body in `text`. */
@@ -27,6 +31,37 @@ export interface Chapter {
   sentenceCount: number;
   firstToken: number;
   tokenCount: number;
+}
+
+/** A part (BOOK, PART, VOLUME) holding chapters: the upper level of a two-level text. */
+export interface Part {
+  /** 0-based position in `parts`. */
+  index: number;
+  /** Display title, e.g. "Book Two: The Miller". */
+  title: string;
+  /** The heading line as it stands in the text. */
+  heading: string;
+  /** 1-based line of the heading in the source file. */
+  line: number;
+  /** Index in `chapters` of its first chapter, and how many it holds. */
+  firstChapter: number;
+  chapterCount: number;
+}
+
+/** What the heading detection took and turned down, with source lines. */
+export interface HeadingReport {
+  taken: { line: number; text: string; title: string; level: 'part' | 'chapter' }[];
+  rejected: { line: number; text: string; reason: string }[];
+}
+
+/** Lines trimmed from the front or back of the file (1-based, inclusive). */
+export interface TrimmedLines {
+  from: number;
+  to: number;
+  /** What marked the cut: the plan's marker, or the e-text licence line that was found. */
+  marker: string;
+  /** True when found without a marker in the plan. */
+  automatic: boolean;
 }
 
 export interface Columns {
@@ -103,6 +138,12 @@ export interface TextModel {
    * paragraphs, sentences or tokens. Empty when every paragraph is in a chapter.
    */
   skipped?: TextRange[];
+  /** The parts of a two-level text, in order; empty when chapters are not grouped into parts. */
+  parts?: Part[];
+  /** The headings taken and the near-misses turned down. */
+  headings?: HeadingReport;
+  /** Front and back matter trimmed before reading (by the plan's markers or an e-text licence header and footer). */
+  trimmed?: { front?: TrimmedLines; back?: TrimmedLines };
 }
 
 /** A stretch of `text` and the 1-based source line where it begins. */
@@ -114,9 +155,15 @@ export interface TextRange {
 
 export interface TextOptions {
   id: string;
-  /** Trim everything before the first line that contains this marker (the marker line is dropped too). */
+  /**
+   * Trim everything before the first line that contains this marker (the marker line is dropped too).
+   * Without one, an e-text licence header ending in a "*** START OF …" line is trimmed.
+   */
   start?: string;
-  /** Trim everything from the first line after `start` that contains this marker. */
+  /**
+   * Trim everything from the first line after `start` that contains this marker.
+   * Without one, an e-text licence footer from its "*** END OF …" line (or the "End of the … e-book" line just above) is trimmed.
+   */
   end?: string;
   /** A regular expression (source string, matched per line, case-insensitive) that a chapter heading line matches. Replaces automatic detection. */
   chapterPattern?: string;

@@ -1,13 +1,23 @@
 /**
  * The block structure of a normalised text: blank-line separated blocks become
  * paragraphs or headings. A heading is the first line of a block; what follows
- * it in the same block is split off (a title line, or the body). Bare numerals
- * ("III.", "VI. A Title") are kept as headings only when they form a plausible
- * sequence and the text has no keyword chapter headings.
+ * it in the same block is split off (a title line, or the body).
+ *
+ * Candidates are then judged the way a reader of a printed book would:
+ * - a table of contents (a run of heading lines with next to no text between
+ *   them, under a "Contents" line or repeated by the headings that follow) is
+ *   front matter, not chapters;
+ * - bare numerals ("III.", "VI. A Title") stand only in a text with no keyword
+ *   chapter headings, and only when they form a plausible sequence, are not a
+ *   run with nothing between them (a list), and do not number stanzas of verse;
+ * - "Section" headings inside a text that has chapters (or letters, staves,
+ *   cantos) are subdivisions, not units;
+ * - a closing "THE END" or "FINIS" is back matter.
+ * Every candidate turned down is reported with the reason.
  */
 
 import { isSpace } from './chars.ts';
-import { displayCustomTitle, displayTitle, parseHeadingLine, type HeadingLine } from './headings.ts';
+import { displayCustomTitle, displayTitle, nearMissReason, parseHeadingLine, type HeadingLine } from './headings.ts';
 import { isTitleLine } from './titles.ts';
 
 export interface ParagraphUnit {
@@ -20,6 +30,8 @@ export interface ParagraphUnit {
 export interface HeadingUnit {
   t: 'heading';
   kind: 'chapter' | 'part';
+  /** An unnumbered unit (prologue, epilogue, interlude): outside any part. */
+  extra: boolean;
   /** The heading line, trimmed of surrounding white space. */
   heading: string;
   /** Display title. */
@@ -30,7 +42,29 @@ export interface HeadingUnit {
   end: number;
 }
 
-export type Unit = ParagraphUnit | HeadingUnit;
+/** Text outside every chapter that is not a paragraph of one: a closing "THE END". */
+export interface MatterUnit {
+  t: 'matter';
+  start: number;
+  end: number;
+}
+
+export type Unit = ParagraphUnit | HeadingUnit | MatterUnit;
+
+/** A heading line that was taken, at its offset in the text. */
+export interface TakenHeading {
+  at: number;
+  text: string;
+  title: string;
+  level: 'part' | 'chapter';
+}
+
+/** A line that looked like a heading and was turned down, with why. */
+export interface RejectedHeading {
+  at: number;
+  text: string;
+  reason: string;
+}
 
 export interface StructureOptions {
   /** Curator's heading pattern (replaces automatic chapter detection). Default: none. */
@@ -42,6 +76,8 @@ interface Lines {
   start: Uint32Array;
   end: Uint32Array;
   blank: Uint8Array;
+  /** Wrap width, once measured (see wrapWidth). */
+  wrap?: number;
 }
 
 function splitLines(text: string): Lines {
@@ -142,12 +178,20 @@ export interface Structure {
   units: Unit[];
   /** How many lines matched the curator's chapter pattern (0 without one). */
   patternMatches: number;
+  taken: TakenHeading[];
+  rejected: RejectedHeading[];
 }
 
 export function findStructure(text: string, options: StructureOptions = {}): Structure {
   const lines = splitLines(text);
   const custom = options.chapterPattern;
   const lineText = (i: number): string => text.slice(lines.start[i], lines.end[i]).trim();
+  /** Offset of the first non-space character of line i. */
+  const lineAt = (i: number): number => {
+    let o = lines.start[i];
+    while (o < lines.end[i] && isSpace(text.charCodeAt(o))) o++;
+    return o;
+  };
 
   const classify = (i: number): Classified | null => {
     const s = lineText(i);
@@ -162,6 +206,7 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
 
   // Pass 1: blocks into items.
   const items: Item[] = [];
+  const rejected: RejectedHeading[] = [];
   /** A heading that ended its block without a title: the next block may be its title line. */
   let pendingTitleFor = -1;
 
@@ -200,6 +245,10 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
     while (l + 1 < lines.count && !lines.blank[l + 1]) l++;
     const waiting = pendingTitleFor;
     pendingTitleFor = -1;
+    if (l === f && classify(f) === null) {
+      const why = nearMissReason(lineText(f));
+      if (why) rejected.push({ at: lineAt(f), text: lineText(f), reason: why });
+    }
     if (waiting >= 0 && l === f && isTitleCandidate(f)) {
       items.push({ t: 'para', f, l, titleOf: waiting });
       f = l + 1;
@@ -224,27 +273,33 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
   }
 
   // Pass 2: decide which headings stand.
-  const accepted = new Uint8Array(items.length);
-  let numbered = 0;
-  items.forEach((it, i) => {
-    if (it.t !== 'head') return;
-    if (it.c.kind === 'custom' || it.c.kind === 'chapter' || it.c.kind === 'part') accepted[i] = 1;
-    if (it.c.kind === 'custom' || it.c.kind === 'chapter') numbered++;
+  const judged = judgeHeadings(items, {
+    words: (it) => countWords(text.slice(lines.start[it.f], lines.end[it.l])),
+    verse: (it) => isVerse(it, lineText, wrapWidth(lines, lineText)),
+    text: (it) => lineText(it.f),
+    custom: custom !== undefined,
   });
-  let chapterHeads = numbered;
-  if (numbered === 0 && !custom) chapterHeads += acceptBareHeadings(items, accepted);
-  if (chapterHeads > 0) {
-    items.forEach((it, i) => {
-      if (it.t === 'head' && it.c.kind === 'extra') accepted[i] = 1;
-    });
-  }
+  const { accepted, reasons, partsAsChapters } = judged;
+  items.forEach((it, i) => {
+    if (it.t === 'head' && reasons[i]) rejected.push({ at: lineAt(it.f), text: lineText(it.f), reason: reasons[i]! });
+  });
   items.forEach((it) => {
     if (it.t === 'para' && it.titleOf >= 0 && accepted[it.titleOf]) (items[it.titleOf] as HeadItem).titleBlockLine = it.f;
   });
-  const partsAsChapters = chapterHeads === 0;
+  // A closing "THE END" after the last heading is back matter.
+  let closing = -1;
+  for (let i = items.length - 1; i >= 0 && accepted.some((x) => x === 1); i--) {
+    const it = items[i]!;
+    if (it.t === 'head' && accepted[i]) break;
+    if (it.t === 'para' && it.titleOf < 0) {
+      if (it.f === it.l && CLOSING_LINE.test(lineText(it.f))) closing = i;
+      break;
+    }
+  }
 
   // Pass 3: units in text order.
   const units: Unit[] = [];
+  const taken: TakenHeading[] = [];
   const paraUnit = (a: number, b: number): ParagraphUnit => {
     let s = lines.start[a];
     while (isSpace(text.charCodeAt(s))) s++;
@@ -256,7 +311,8 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
   items.forEach((it, i) => {
     if (it.t === 'para') {
       if (it.titleOf >= 0 && accepted[it.titleOf]) return;
-      units.push(paraUnit(it.f, it.l));
+      const unit = paraUnit(it.f, it.l);
+      units.push(i === closing ? { t: 'matter', start: unit.start, end: unit.end } : unit);
       return;
     }
     if (!accepted[i]) {
@@ -273,18 +329,220 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
     units.push({
       t: 'heading',
       kind: isPart ? 'part' : 'chapter',
+      extra: it.c.kind === 'extra',
       heading,
       title,
       start: hp.start,
       end: paraUnit(lastLine, lastLine).end,
     });
+    taken.push({ at: hp.start, text: heading, title, level: isPart ? 'part' : 'chapter' });
   });
   const patternMatches = items.filter((it) => it.t === 'head' && it.c.kind === 'custom').length;
-  return { units, patternMatches };
+  rejected.sort((x, y) => x.at - y.at);
+  return { units, patternMatches, taken, rejected };
+}
+
+/** A closing line of back matter. common practice, no source. */
+const CLOSING_LINE = /^(?:the end|finis)\.?$/i;
+/** A line introducing a table of contents. common practice, no source. */
+const CONTENTS_LABEL = /^(?:table of )?contents\.?$|^list of (?:chapters|contents)\.?$/i;
+/** Most words a stretch may hold between two entries of a table of contents (page numbers, a short gloss). */
+const CONTENTS_FILLER = 12;
+
+function countWords(s: string): number {
+  const m = s.match(/[\p{L}\p{N}]+(?:['’\-][\p{L}\p{N}]+)*/gu);
+  return m ? m.length : 0;
+}
+
+/**
+ * The width a text's prose is wrapped at: the 90th percentile of the lengths
+ * of lines in blocks of two or more lines, or Infinity when every block is one
+ * line (unwrapped paragraphs).
+ */
+function wrapWidth(lines: Lines, lineText: (i: number) => string): number {
+  if (lines.wrap !== undefined) return lines.wrap;
+  const lengths: number[] = [];
+  for (let i = 0; i < lines.count; i++) {
+    if (lines.blank[i]) continue;
+    const inBlock = (i > 0 && !lines.blank[i - 1]) || (i + 1 < lines.count && !lines.blank[i + 1]);
+    if (inBlock) lengths.push(lineText(i).length);
+  }
+  lengths.sort((a, b) => a - b);
+  lines.wrap = lengths.length < 10 ? Infinity : lengths[Math.floor(lengths.length * 0.9)]!;
+  return lines.wrap;
+}
+
+/**
+ * A block of verse: two or more lines, each opening with a capital letter,
+ * none reaching as far as wrapped prose does (three quarters of the wrap
+ * width). common practice, no source.
+ */
+function isVerse(it: ParaItem, lineText: (i: number) => string, wrap: number): boolean {
+  if (it.l === it.f) return false;
+  for (let i = it.f; i <= it.l; i++) {
+    const line = lineText(i);
+    if (!/^[^\p{L}\p{N}]*\p{Lu}/u.test(line)) return false;
+    if (line.length >= 0.75 * wrap) return false;
+  }
+  return true;
+}
+
+interface Judge {
+  words(it: ParaItem): number;
+  verse(it: ParaItem): boolean;
+  text(it: Item): string;
+  custom: boolean;
+}
+
+interface Judged {
+  accepted: Uint8Array;
+  /** Why each turned-down heading item was turned down (undefined for accepted items and paragraphs). */
+  reasons: (string | undefined)[];
+  /** No chapter-level heading stands, so part headings are the units. */
+  partsAsChapters: boolean;
+}
+
+/** An identity for a heading, to find a contents entry again among the headings that follow it. */
+function headingKey(c: Classified): string {
+  if (c.kind === 'custom') return 'custom';
+  const n = c.number ? String(c.number.value) : '';
+  return `${c.kind}:${(c.keyword ?? '').toLowerCase()}:${n}`;
+}
+
+function judgeHeadings(items: Item[], judge: Judge): Judged {
+  const accepted = new Uint8Array(items.length);
+  const reasons: (string | undefined)[] = new Array(items.length);
+  const heads: number[] = [];
+  items.forEach((it, i) => {
+    if (it.t === 'head') heads.push(i);
+  });
+  /** Position of an item among the headings. */
+  const headPos = new Map<number, number>(heads.map((h, p) => [h, p]));
+  // What stands between each heading and the next: words and blocks of body text (title lines left out).
+  const gapWords = new Map<number, number>();
+  const gapParas = new Map<number, ParaItem[]>();
+  for (let h = 0; h < heads.length; h++) {
+    const end = h + 1 < heads.length ? heads[h + 1]! : items.length;
+    let words = 0;
+    const paras: ParaItem[] = [];
+    for (let i = heads[h]! + 1; i < end; i++) {
+      const it = items[i]!;
+      if (it.t !== 'para' || it.titleOf === heads[h]) continue;
+      words += judge.words(it);
+      paras.push(it);
+    }
+    gapWords.set(heads[h]!, words);
+    gapParas.set(heads[h]!, paras);
+  }
+
+  // A table of contents: a run of headings with next to no text between them, before any heading has a body,
+  // under a "Contents" line or followed later by the same headings.
+  const contents = new Set<number>();
+  let k = 0;
+  while (k < heads.length) {
+    let e = k;
+    while (e + 1 < heads.length && gapWords.get(heads[e]!)! <= CONTENTS_FILLER) e++;
+    if (e > k) {
+      const first = heads[k]!;
+      let label = false;
+      for (let i = first - 1; i >= 0 && i >= first - 3; i--) {
+        const it = items[i]!;
+        if (it.t === 'para' && it.f === it.l && CONTENTS_LABEL.test(judge.text(it))) label = true;
+        if (it.t === 'head') break;
+      }
+      // The headings listed again: the first two entries' keys, in order, at some later heading j. The entries
+      // are then the headings from k up to j − 1 (the run may end with the first real heading itself).
+      const keyOf = (h: number): string => headingKey((items[heads[h]!] as HeadItem).c);
+      let repeatAt = -1;
+      for (let j = k + 2; j + 1 < heads.length && repeatAt < 0; j++) {
+        if (keyOf(j) === keyOf(k) && keyOf(j + 1) === keyOf(k + 1)) repeatAt = j;
+      }
+      const last = repeatAt >= 0 ? Math.min(repeatAt - 1, e) : label ? (gapWords.get(heads[e]!)! <= CONTENTS_FILLER ? e : e - 1) : -1;
+      if (last > k) for (let j = k; j <= last; j++) contents.add(heads[j]!);
+    }
+    if (gapWords.get(heads[e]!)! > CONTENTS_FILLER && !contents.has(heads[e]!)) break; // the body has begun
+    k = e + 1;
+  }
+  const contentsReason = 'an entry of the table of contents (a run of heading lines with next to no text between them, listed again by the headings that follow or under a “Contents” line)';
+
+  let numbered = 0;
+  const unitWords = new Set<string>();
+  for (const i of heads) {
+    const c = (items[i] as HeadItem).c;
+    if (contents.has(i)) {
+      reasons[i] = contentsReason;
+      continue;
+    }
+    if (c.kind === 'custom' || c.kind === 'part') accepted[i] = 1;
+    if (c.kind === 'chapter') {
+      accepted[i] = 1;
+      unitWords.add(c.keyword!);
+    }
+    if (c.kind === 'custom' || c.kind === 'chapter') numbered++;
+  }
+  // "Section" under chapters (letters, staves, cantos) is a subdivision of them.
+  if (unitWords.has('Section') && unitWords.size > 1) {
+    for (const i of heads) {
+      const c = (items[i] as HeadItem).c;
+      if (c.kind === 'chapter' && c.keyword === 'Section' && accepted[i]) {
+        accepted[i] = 0;
+        numbered--;
+        reasons[i] = 'a section inside a chapter (the text’s units are headed with another word)';
+      }
+    }
+  }
+  let chapterHeads = numbered;
+  const bare = heads.filter((i) => (items[i] as HeadItem).c.kind === 'bare' && !contents.has(i));
+  if (numbered > 0 || judge.custom) {
+    for (const i of bare) {
+      reasons[i] = judge.custom
+        ? 'a bare numeral; the plan gives a chapter pattern'
+        : 'a bare numeral in a text whose chapters are headed with a word (Chapter, Letter, Stave…)';
+    }
+  } else {
+    const eligible = new Set<number>();
+    // A run of three or more bare numerals with nothing between them is a list (or a contents page).
+    const list = new Set<number>();
+    for (let b = 0; b < bare.length; ) {
+      let e = b;
+      const style = (i: number): string | undefined => (items[i] as HeadItem & { c: HeadingLine }).c.number?.style;
+      while (
+        e + 1 < bare.length &&
+        headPos.get(bare[e + 1]!) === headPos.get(bare[e]!)! + 1 &&
+        gapParas.get(bare[e]!)!.length === 0 &&
+        style(bare[e + 1]!) === style(bare[e]!)
+      ) e++;
+      if (e - b >= 2) for (let j = b; j <= e; j++) list.add(bare[j]!);
+      b = e + 1;
+    }
+    for (const i of bare) {
+      const paras = gapParas.get(i)!;
+      if (list.has(i)) {
+        reasons[i] = 'one of a run of numbered lines with no text between them (a list)';
+        continue;
+      }
+      const verse = paras.filter((p) => judge.verse(p)).length;
+      const prose = paras.filter((p) => !judge.verse(p) && judge.words(p) > CONTENTS_FILLER).length;
+      if (verse > 0 && prose === 0) {
+        reasons[i] = 'numbers a stanza of verse, not a chapter';
+        continue;
+      }
+      eligible.add(i);
+    }
+    chapterHeads += acceptBareHeadings(items, accepted, eligible);
+    for (const i of eligible) if (!accepted[i]) reasons[i] = 'a bare numeral out of sequence with the numbered headings around it';
+  }
+  for (const i of heads) {
+    const c = (items[i] as HeadItem).c;
+    if (c.kind !== 'extra' || contents.has(i)) continue;
+    if (chapterHeads > 0) accepted[i] = 1;
+    else reasons[i] = 'an unnumbered unit (prologue, epilogue, interlude) in a text with no numbered chapters';
+  }
+  return { accepted, reasons, partsAsChapters: chapterHeads === 0 };
 }
 
 /** Mark the bare-numeral headings that form a plausible sequence; returns how many were kept. */
-function acceptBareHeadings(items: Item[], accepted: Uint8Array): number {
+function acceptBareHeadings(items: Item[], accepted: Uint8Array, eligible: Set<number>): number {
   let best: number[] = [];
   for (const style of ['roman', 'arabic'] as const) {
     const idx: number[] = [];
@@ -294,7 +552,7 @@ function acceptBareHeadings(items: Item[], accepted: Uint8Array): number {
     items.forEach((it, i) => {
       if (it.t !== 'head') return;
       if (it.c.kind === 'part') seg++;
-      if (it.c.kind === 'bare' && it.c.number?.style === style) {
+      if (it.c.kind === 'bare' && it.c.number?.style === style && eligible.has(i)) {
         idx.push(i);
         values.push(it.c.number.value);
         segment.push(seg);
