@@ -177,13 +177,34 @@ async function check(rest: string[], values: Values, io: Io): Promise<number> {
   return hasErrors(problems) ? EXIT.problems : EXIT.ok;
 }
 
+/** How many near-miss headings `check` lists per text. */
+const NEAR_MISSES_SHOWN = 30;
+
 function printTextSummary(t: PrepareResult['texts'][number], io: Io): void {
   io.out(`\nText "${t.id}" (${t.source}): ${t.words.toLocaleString('en-GB')} words, ${t.chapters.length} chapters\n`);
+  for (const [side, cut] of [['front', t.trimmed.front], ['back', t.trimmed.back]] as const) {
+    if (!cut) continue;
+    const what = cut.automatic ? `the e-text licence ${side === 'front' ? 'header' : 'footer'}` : `the ${side === 'front' ? 'start' : 'end'} marker of the plan`;
+    io.out(`  Trimmed lines ${cut.from}–${cut.to} (${side} matter, ${side === 'front' ? 'up to' : 'from'} ${what}: "${cut.marker}")\n`);
+  }
+  if (t.outside.length && t.headings.taken.length) {
+    io.out(`  Read but outside every chapter: ${t.outside.map((r) => (r.from === r.to ? `line ${r.from}` : `lines ${r.from}–${r.to}`)).join(', ')}\n`);
+  }
+  const partLines = new Map(t.headings.taken.filter((h) => h.level === 'part').map((h) => [h.title, h.line]));
   let part: string | null = null;
   for (const c of t.chapters) {
-    if (c.part && c.part !== part) io.out(`  ${c.part}\n`);
+    if (c.part && c.part !== part) io.out(`  ${c.part}, line ${partLines.get(c.part) ?? '?'}\n`);
     part = c.part;
-    io.out(`  ${String(c.number).padStart(3)}. ${c.title}  (${c.words.toLocaleString('en-GB')} words)\n`);
+    const at = c.line > 0 && t.headings.taken.length > 0 ? `, line ${c.line}` : '';
+    const indent = partLines.size > 0 && c.part ? '    ' : '  ';
+    io.out(`${indent}${String(c.number).padStart(3)}. ${c.title}${at}  (${c.words.toLocaleString('en-GB')} words)\n`);
+  }
+  if (t.headings.rejected.length) {
+    const shown = t.headings.rejected.slice(0, NEAR_MISSES_SHOWN);
+    io.out('  Lines that look like headings but were not taken:\n');
+    for (const r of shown) io.out(`    line ${r.line}: "${r.text}" — ${r.reason}\n`);
+    const more = t.headings.rejected.length - shown.length;
+    if (more > 0) io.out(`    … and ${more} more\n`);
   }
   if (t.cast.length) {
     io.out('  Cast mentions:\n');

@@ -29,7 +29,7 @@ import type { ChartData, PinnedNote } from './charts/types.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
 import { readText } from './stages/read-text.ts';
 import type { ReadText } from './stages/read-text.ts';
-import type { CastMember, TextOptions } from './text/model.ts';
+import type { CastMember, HeadingReport, TextOptions, TrimmedLines } from './text/model.ts';
 import type { PreparedExhibit, PreparedMethod, PreparedNote, PreparedPanel, PreparedRoom, PreparedText } from './stages/prepared.ts';
 import type { StructureResult } from './measures/structure.ts';
 import { planJobs } from './stages/jobs.ts';
@@ -74,7 +74,12 @@ export interface TextSummary {
   id: string;
   source: string;
   words: number;
-  chapters: { number: number; title: string; words: number; part: string | null }[];
+  chapters: { number: number; title: string; words: number; part: string | null; line: number }[];
+  /** The headings taken and turned down, and the front and back matter trimmed (source lines). */
+  headings: HeadingReport;
+  trimmed: { front?: TrimmedLines; back?: TrimmedLines };
+  /** Stretches of the text read but outside every chapter (title page, contents, preface; source lines, inclusive). */
+  outside: { from: number; to: number }[];
   cast: { id: string; name: string; mentions: number }[];
   ambiguous: { text: string; chapter: number; candidates: string[] }[];
   warnings: Problem[];
@@ -317,7 +322,7 @@ function preparePanel(
   };
 }
 
-type NoteAt = { chapter?: number; character?: string; word?: string; segment?: number };
+type NoteAt = { part?: number; chapter?: number; character?: string; word?: string; segment?: number };
 
 /** Places a curator's note on the chart's data, or says why it cannot be placed. */
 export function resolveNote(
@@ -328,6 +333,22 @@ export function resolveNote(
   /** How many equal segments the measure counted by, if it did. */
   segments?: number,
 ): { at: PinnedNote['at']; target: string } | { problem: string; hint: string } {
+  if (at.chapter !== undefined && at.part !== undefined) {
+    // { part: 2, chapter: 3 }: the third chapter of the second part, found by its running number.
+    const part = structure.parts?.[at.part - 1];
+    if (!part) {
+      const n = structure.parts?.length ?? 0;
+      return {
+        problem: `the note points at part ${at.part}, but the text has ${n === 0 ? 'no parts' : `${n} part${n === 1 ? '' : 's'}`}`,
+        hint: n === 0 ? 'point it at a chapter by its number through the text: { chapter: N }' : `use a part from 1 to ${n}`,
+      };
+    }
+    if (at.chapter > part.chapters) {
+      return { problem: `the note points at chapter ${at.chapter} of ${part.title}, which has ${part.chapters} chapter${part.chapters === 1 ? '' : 's'}`, hint: `use a chapter from 1 to ${part.chapters}` };
+    }
+    const running = part.firstChapter + at.chapter - 1;
+    return placeChapter(running, structure.chapters[running - 1]!.title, data);
+  }
   if (at.chapter !== undefined) {
     const ch = structure.chapters[at.chapter - 1];
     if (!ch) return { problem: `the note points at chapter ${at.chapter}, but the text has ${structure.chapters.length} chapters`, hint: `use a chapter from 1 to ${structure.chapters.length}` };
@@ -464,7 +485,10 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
     id: s.job.id,
     source: s.job.display,
     words: s.structure.words,
-    chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, words: c.words, part: c.part })),
+    chapters: s.structure.chapters.map((c, i) => ({ number: c.number, title: c.title, words: c.words, part: c.part, line: model.chapters[i]?.line ?? 0 })),
+    headings: model.headings ?? { taken: [], rejected: [] },
+    trimmed: model.trimmed ?? {},
+    outside: (model.skipped ?? []).map((r) => ({ from: r.line, to: model.position(Math.max(r.start, r.end - 1)).line })),
     cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
     ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
     warnings: [

@@ -137,13 +137,27 @@ export const castMemberSchema = z
 
 export const noteAnchorSchema = z
   .strictObject({
-    chapter: z.number().int().positive().optional().describe('Chapter number, 1-based. Optional.'),
+    part: z
+      .number()
+      .int()
+      .positive()
+      .optional()
+      .describe('Part (BOOK, PART, VOLUME) of a two-level text, 1-based; with `chapter`, the chapter is counted within the part ({ part: 2, chapter: 3 } is the third chapter of the second part). Optional.'),
+    chapter: z.number().int().positive().optional().describe('Chapter number, 1-based, counted through the whole text (or within `part` when one is given). Optional.'),
     character: idSchema.optional().describe('Cast id of a character. Optional.'),
     word: text.optional().describe('A word of the text. Optional.'),
     segment: z.number().int().positive().optional().describe('Segment number, 1-based. Optional.'),
   })
   .superRefine((at, ctx) => {
-    const given = Object.entries(at).filter(([, v]) => v !== undefined).length;
+    if (at.part !== undefined && at.chapter === undefined) {
+      ctx.addIssue({
+        code: 'custom',
+        message: 'the note names a part but no chapter in it',
+        params: { hint: 'add the chapter within the part, e.g. at: { part: 2, chapter: 3 }' },
+      });
+      return;
+    }
+    const given = Object.entries(at).filter(([k, v]) => v !== undefined && k !== 'part').length;
     if (given !== 1) {
       ctx.addIssue({
         code: 'custom',
@@ -152,7 +166,7 @@ export const noteAnchorSchema = z
       });
     }
   })
-  .describe('What the note points at: exactly one of chapter, character, word, segment. Required.');
+  .describe('What the note points at: exactly one of chapter (optionally within a part), character, word, segment. Required.');
 
 export const noteSchema = z
   .strictObject({

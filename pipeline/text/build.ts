@@ -127,6 +127,29 @@ function tokenStore(capacity: number) {
   return store;
 }
 
+/**
+ * Where chapter numbers restart in each part, "Chapter I" names several
+ * chapters: each chapter in a part then carries its part's heading in its
+ * title ("Book Two, Chapter I"), so that charts, tables and notes can tell
+ * them apart. Titles that are already unique are left as they are.
+ */
+function nameChaptersWithinParts(chapters: Chapter[], parts: Part[]): void {
+  if (parts.length === 0) return;
+  const seen = new Set<string>();
+  let repeated = false;
+  for (const c of chapters) {
+    if (seen.has(c.title)) repeated = true;
+    seen.add(c.title);
+  }
+  if (!repeated) return;
+  for (const c of chapters) {
+    if (c.partIndex === null) continue;
+    const part = parts[c.partIndex]!.title;
+    const colon = part.indexOf(': ');
+    c.title = `${colon > 0 ? part.slice(0, colon) : part}, ${c.title}`;
+  }
+}
+
 function assemble(text: string, units: Unit[], hasChapters: boolean, position: (o: number) => { line: number; column: number }): Assembled {
   const p = { start: u32Buffer(), end: u32Buffer(), chapter: u32Buffer(), line: u32Buffer() };
   const sentenceEstimate = Math.ceil(text.length / 80);
@@ -254,6 +277,7 @@ function assemble(text: string, units: Unit[], hasChapters: boolean, position: (
     }
   }
   close();
+  nameChaptersWithinParts(chapters, parts);
 
   return {
     chapters,

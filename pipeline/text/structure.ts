@@ -346,6 +346,8 @@ export function findStructure(text: string, options: StructureOptions = {}): Str
 const CLOSING_LINE = /^(?:the end|finis)\.?$/i;
 /** A line introducing a table of contents. common practice, no source. */
 const CONTENTS_LABEL = /^(?:table of )?contents\.?$|^list of (?:chapters|contents)\.?$/i;
+const CONTENTS_REPEATED = 'an entry of the table of contents (heading lines with next to no text between them, listed again by the headings that follow)';
+const CONTENTS_LABELLED = 'an entry of the table of contents (heading lines with next to no text between them, under a “Contents” line)';
 /** Most words a stretch may hold between two entries of a table of contents (page numbers, a short gloss). */
 const CONTENTS_FILLER = 12;
 
@@ -458,21 +460,22 @@ function judgeHeadings(items: Item[], judge: Judge): Judged {
         if (keyOf(j) === keyOf(k) && keyOf(j + 1) === keyOf(k + 1)) repeatAt = j;
       }
       const last = repeatAt >= 0 ? Math.min(repeatAt - 1, e) : label ? (gapWords.get(heads[e]!)! <= CONTENTS_FILLER ? e : e - 1) : -1;
-      if (last > k) for (let j = k; j <= last; j++) contents.add(heads[j]!);
+      if (last > k) {
+        for (let j = k; j <= last; j++) {
+          contents.add(heads[j]!);
+          reasons[heads[j]!] = repeatAt >= 0 ? CONTENTS_REPEATED : CONTENTS_LABELLED;
+        }
+      }
     }
     if (gapWords.get(heads[e]!)! > CONTENTS_FILLER && !contents.has(heads[e]!)) break; // the body has begun
     k = e + 1;
   }
-  const contentsReason = 'an entry of the table of contents (a run of heading lines with next to no text between them, listed again by the headings that follow or under a “Contents” line)';
 
   let numbered = 0;
   const unitWords = new Set<string>();
   for (const i of heads) {
     const c = (items[i] as HeadItem).c;
-    if (contents.has(i)) {
-      reasons[i] = contentsReason;
-      continue;
-    }
+    if (contents.has(i)) continue;
     if (c.kind === 'custom' || c.kind === 'part') accepted[i] = 1;
     if (c.kind === 'chapter') {
       accepted[i] = 1;

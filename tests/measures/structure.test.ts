@@ -1,6 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { structure } from '../../pipeline/measures/structure.ts';
+import { readFileSync } from 'node:fs';
 import { context, TALE } from './fixture.ts';
+import { resolveNote } from '../../pipeline/exhibit.ts';
+import { noteAnchorSchema } from '../../pipeline/plan/schema.ts';
 
 /** Word count by ICU's UAX #29 word boundaries (isWordLike segments). */
 function icuWords(s: string): number {
@@ -39,7 +42,53 @@ describe('structure', () => {
     if (bars.kind === 'bars') expect(bars.series[0]!.values).toEqual(result.chapters.map((c) => c.sentences));
   });
 
+  it('has no parts for a one-level text', () => {
+    expect(result.parts).toBeUndefined();
+    expect(result.chapters.every((c) => c.partNumber === null && c.numberInPart === null)).toBe(true);
+  });
+
+  it('adds the parts of a two-level text, with each chapter numbered in its part and through the text', () => {
+    // Fixture and counts: tests/text/books.test.ts (two-level.txt, words by `wc -w` over each chapter's lines).
+    const text = readFileSync(new URL('../fixtures/headings/two-level.txt', import.meta.url), 'utf8');
+    const r = structure.compute(context(text), structure.params.parse({}));
+    expect(r.chapters.map((c) => [c.number, c.partNumber, c.numberInPart])).toEqual([
+      [1, null, null], [2, 1, 1], [3, 1, 2], [4, 1, 3], [5, 2, 1], [6, 2, 2], [7, 3, 1], [8, null, null],
+    ]);
+    expect(r.parts!.map((p) => [p.number, p.title, p.firstChapter, p.chapters, p.words])).toEqual([
+      [1, 'Book One: The Mill', 2, 3, 39 + 48 + 8],
+      [2, 'Book Two: The Miller', 5, 2, 82 + 11],
+      [3, 'Book Three', 7, 1, 50],
+    ]);
+    const table = structure.table(r, { unit: 'words' });
+    expect(table.columns.map((c) => c.key)).toEqual(['number', 'title', 'part', 'words', 'paragraphs', 'sentences', 'meanSentence']);
+    expect(table.rows[5]!.slice(0, 4)).toEqual([6, 'Book Two, Chapter II', 'Book Two: The Miller', 11]);
+  });
+
   it('rejects unknown parameters', () => {
     expect(structure.params.safeParse({ units: 'words' }).success).toBe(false);
+  });
+});
+
+describe('curator notes on a two-level text', () => {
+  const text = readFileSync(new URL('../fixtures/headings/two-level.txt', import.meta.url), 'utf8');
+  const r = structure.compute(context(text), structure.params.parse({}));
+  const bars = structure.views.bars!(r, { unit: 'words' });
+
+  it('finds { part: 2, chapter: 2 } as the sixth chapter, and { chapter: 6 } as the same one', () => {
+    expect(resolveNote({ part: 2, chapter: 2 }, bars, r, [])).toEqual({ at: { category: 'Book Two, Chapter II' }, target: 'Book Two, Chapter II' });
+    expect(resolveNote({ chapter: 6 }, bars, r, [])).toEqual(resolveNote({ part: 2, chapter: 2 }, bars, r, []));
+  });
+
+  it('says what is wrong with a part or chapter the text does not have', () => {
+    expect(resolveNote({ part: 4, chapter: 1 }, bars, r, [])).toMatchObject({ problem: 'the note points at part 4, but the text has 3 parts' });
+    expect(resolveNote({ part: 3, chapter: 2 }, bars, r, [])).toMatchObject({ problem: 'the note points at chapter 2 of Book Three, which has 1 chapter' });
+    const flat = structure.compute(context(TALE), structure.params.parse({}));
+    expect(resolveNote({ part: 1, chapter: 1 }, structure.views.bars!(flat, { unit: 'words' }), flat, [])).toMatchObject({ problem: 'the note points at part 1, but the text has no parts' });
+  });
+
+  it('takes a part only together with a chapter in the plan', () => {
+    expect(noteAnchorSchema.safeParse({ part: 2, chapter: 3 }).success).toBe(true);
+    expect(noteAnchorSchema.safeParse({ part: 2 }).success).toBe(false);
+    expect(noteAnchorSchema.safeParse({ part: 2, chapter: 3, word: 'mill' }).success).toBe(false);
   });
 });

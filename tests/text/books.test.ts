@@ -67,15 +67,16 @@ describe('book-shaped fixtures', () => {
   });
 
   it('two levels: books above chapters numbered within each book, with a prologue and an epilogue outside them', () => {
+    // Chapter numbers restart in each book, so each title carries its book (see nameChaptersWithinParts).
     const m = book('two-level.txt');
     expectChapters(m, [
       ['Prologue', 6, 26],
-      ['Chapter I', 16, 39],
-      ['Chapter II', 22, 48],
-      ['Chapter III', 30, 8],
-      ['Chapter I', 39, 82],
-      ['Chapter II', 49, 11],
-      ['Chapter I', 56, 50],
+      ['Book One, Chapter I', 16, 39],
+      ['Book One, Chapter II', 22, 48],
+      ['Book One, Chapter III', 30, 8],
+      ['Book Two, Chapter I', 39, 82],
+      ['Book Two, Chapter II', 49, 11],
+      ['Book Three, Chapter I', 56, 50],
       ['Epilogue', 65, 12],
     ]);
     expect(m.parts!.map((p) => [p.title, p.line, p.firstChapter, p.chapterCount])).toEqual([

@@ -73,7 +73,8 @@ describe('chapter headings, one fixture per style', () => {
 
   it('BOOK ONE / Book the Second / PART III set the part and are not chapters', () => {
     const m = model(fixture('parts.txt'));
-    expect(titles(m)).toEqual(['Chapter I', 'Chapter II', 'Chapter I', 'Chapter II', 'Chapter I']);
+    // Chapter numbers restart in each part, so each title carries its part.
+    expect(titles(m)).toEqual(['Book One, Chapter I', 'Book One, Chapter II', 'Book the Second, Chapter I', 'Book the Second, Chapter II', 'Part III, Chapter I']);
     expect(parts(m)).toEqual([
       'Book One: The River Years',
       'Book One: The River Years',
@@ -85,7 +86,7 @@ describe('chapter headings, one fixture per style', () => {
 
   it('bare numerals restarting in each part', () => {
     const m = model(fixture('parts-bare-numerals.txt'));
-    expect(titles(m)).toEqual(['Chapter 1', 'Chapter 2', 'Chapter 1', 'Chapter 2']);
+    expect(titles(m)).toEqual(['Part One, Chapter 1', 'Part One, Chapter 2', 'Part Two, Chapter 1', 'Part Two, Chapter 2']);
     expect(parts(m)).toEqual(['Part One', 'Part One', 'Part Two', 'Part Two']);
   });
 
