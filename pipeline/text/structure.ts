@@ -455,9 +455,18 @@ function judgeHeadings(items: Item[], judge: Judge): Judged {
       // The headings listed again: the first two entries' keys, in order, at some later heading j. The entries
       // are then the headings from k up to j − 1 (the run may end with the first real heading itself).
       const keyOf = (h: number): string => headingKey((items[heads[h]!] as HeadItem).c);
+      // The entries must be far shorter than the chapters they list (a quarter of their words at most), so that
+      // a run of very short numbered sections that restarts its numbering is not taken for a contents page.
+      const wordsOf = (from: number, to: number): number => {
+        let w = 0;
+        for (let h = from; h < to && h < heads.length; h++) w += gapWords.get(heads[h]!)!;
+        return w;
+      };
       let repeatAt = -1;
       for (let j = k + 2; j + 1 < heads.length && repeatAt < 0; j++) {
-        if (keyOf(j) === keyOf(k) && keyOf(j + 1) === keyOf(k + 1)) repeatAt = j;
+        if (keyOf(j) !== keyOf(k) || keyOf(j + 1) !== keyOf(k + 1)) continue;
+        const entries = Math.min(j, e + 1) - k;
+        if (wordsOf(k, k + entries) <= 0.25 * wordsOf(j, j + entries)) repeatAt = j;
       }
       const last = repeatAt >= 0 ? Math.min(repeatAt - 1, e) : label ? (gapWords.get(heads[e]!)! <= CONTENTS_FILLER ? e : e - 1) : -1;
       if (last > k) {

@@ -143,6 +143,13 @@ describe('heading styles, one line each', () => {
     expect(m.headings!.rejected.map((r) => r.line)).toEqual([1, 2]);
   });
 
+  it('does not take short numbered sections that restart their numbering for a contents page', () => {
+    const section = (n: string): string => `${n}\n\nA short section of a few words only.\n`;
+    const m = model(['1', '2', '3', '1', '2', '3'].map(section).join('\n'));
+    expect(m.headings!.rejected.filter((r) => /contents/.test(r.reason))).toEqual([]);
+    expect(m.chapters.map((c) => c.line)).toEqual([1, 5, 9]);
+  });
+
   it('reports a line that starts like a heading but reads as a sentence, and not a sentence starting "Part of"', () => {
     const m = model('Chapter one was the dullest, she thought.\n\nPart of the reason was the rain.\n');
     expect(m.headings!.rejected.map((r) => [r.line, r.text])).toEqual([[1, 'Chapter one was the dullest, she thought.']]);
