@@ -35,7 +35,7 @@ const ETEXT_START = /^[ \t]*\*{3,}[ \t]*START OF (?:THE|THIS)\b.*$/im;
 const ETEXT_SMALL_PRINT_END = /^[ \t]*\*END\*[ \t]*THE SMALL PRINT\b.*$/im;
 /** The footer's first line. */
 const ETEXT_END = /^[ \t]*\*{3,}[ \t]*END OF (?:THE|THIS)\b.*$/im;
-/** "End of the … e-book/e-text of …", the closing line some e-texts print above the end marker. */
+/** "End of the … e-book/e-text of …", the closing line some e-texts print above the end marker (or without one). */
 const ETEXT_END_LINE = /^[ \t]*End of (?:the |this )?.{0,100}?\be-?(?:book|text)s?\b.*$/im;
 
 function lineEnd(text: string, at: number): number {
@@ -68,8 +68,8 @@ export function findEtextMarkers(text: string): { header: { start: number; end: 
       while (s > from && text.slice(s, lineEnd(text, s)).trim() === '') s = lineStart(text, s - 1);
       const line = { start: s, end: lineEnd(text, s) };
       if (line.start < from) break;
-      const re = new RegExp(ETEXT_END_LINE.source, 'i');
-      if (re.test(text.slice(line.start, line.end))) {
+      // Right above the end marker, any "End of …" line closes the text ("End of the … e-book of X", "End of X's Y, by Z").
+      if (/^[ \t]*End of\b/i.test(text.slice(line.start, line.end))) {
         footer = line;
         break;
       }

@@ -185,6 +185,12 @@ describe('e-text licence header and footer', () => {
     expect(m.chapters[0]!.tokenCount).toBe(5);
   });
 
+  it('takes any "End of …" line just above the end marker as the start of the footer', () => {
+    const m = model(`*** START OF THE E-TEXT A TALE ***\n${body}\nEnd of Wenna Trask's A Tale\n\n*** END OF THE E-TEXT A TALE ***\n`);
+    expect(m.trimmed!.back).toMatchObject({ from: 6, marker: "End of Wenna Trask's A Tale" });
+    expect(m.chapters[0]!.tokenCount).toBe(5);
+  });
+
   it('leaves a text without them alone, and lets the plan’s markers win on their side', () => {
     expect(model(body).trimmed).toEqual({});
     const m = model(`*** START OF THE E-TEXT A TALE ***\nBEGIN\n${body}\n*** END OF THE E-TEXT A TALE ***\nfooter\n`, { start: 'BEGIN' });
