@@ -33,6 +33,8 @@ const given = (a: { hint?: string }): string | undefined => a.hint;
 
 const STAY_INSIDE = (dir: string) => `paths must stay inside the exhibit folder (${dir}); move the file into it and write the path relative to it`;
 const NOT_WELL_FORMED = 'the YAML is not well-formed here';
+const RESAVE = 'open it in a text editor and save it again as UTF-8 (in most editors: Save As, then choose the "UTF-8" encoding), then run the command again';
+const UTF16 = { 'utf-16le': 'UTF-16 (little-endian)', 'utf-16be': 'UTF-16 (big-endian)' } as const;
 
 export const catalogue = {
   // ——— the plan file ———
@@ -274,6 +276,50 @@ export const catalogue = {
     example: { name: 'mood', ids: ['moods'] },
   }),
 
+  // ——— any file read as text: texts, word lists, cast files, the plan ———
+  'file/not-utf8': entry<{ file: string; byte: string; line: number; column: number; offset: number }>({
+    title: 'A file that is not UTF-8',
+    severity: 'error',
+    message: (a) =>
+      `${a.file} is not valid UTF-8: the byte ${a.byte} at line ${a.line}, column ${a.column} (byte offset ${a.offset}) is not part of a UTF-8 character (the file may be in Latin-1 or Windows-1252)`,
+    hint: () => `Re-save the file as UTF-8: ${RESAVE}`,
+    example: { file: 'data/moods.tsv', byte: '0xE9', line: 12, column: 4, offset: 181 },
+  }),
+  'file/zero-bytes': entry<{ file: string; line: number; column: number; offset: number }>({
+    title: 'A file with zero bytes that is not UTF-16',
+    severity: 'error',
+    message: (a) =>
+      `${a.file} holds a zero byte at line ${a.line}, column ${a.column} (byte offset ${a.offset}), which plain text never does: it may be a word-processor document, a damaged file, or in an encoding other than UTF-8 and UTF-16`,
+    hint: () => `export or save it as plain text: ${RESAVE}`,
+    example: { file: 'texts/tale.txt', line: 1, column: 1, offset: 0 },
+  }),
+  'file/utf32': entry<{ file: string }>({
+    title: 'A file saved as UTF-32',
+    severity: 'error',
+    message: (a) => `${a.file} is saved as UTF-32, which is not read here`,
+    hint: () => RESAVE,
+    example: { file: 'texts/tale.txt' },
+  }),
+  'file/bad-utf16': entry<{ file: string; encoding: 'utf-16le' | 'utf-16be'; byMark: boolean; odd: boolean; line: number; column: number; offset: number }>({
+    title: 'A UTF-16 file that is cut short or damaged',
+    severity: 'error',
+    message: (a) =>
+      `${a.file} looks like ${UTF16[a.encoding]} (${a.byMark ? 'its byte order mark says so' : 'by the pattern of its zero bytes'}) but ${
+        a.odd
+          ? 'has an odd number of bytes, so its last character is cut short'
+          : `the two bytes at line ${a.line}, column ${a.column} (byte offset ${a.offset}) are half of a character with no other half`
+      }`,
+    hint: (a) => (a.odd ? `check that the file was copied whole, then ${RESAVE}` : `the file may be damaged or not UTF-16 after all; ${RESAVE}`),
+    example: { file: 'texts/tale.txt', encoding: 'utf-16le', byMark: true, odd: true, line: 120, column: 7, offset: 40211 },
+  }),
+  'file/utf16-no-bom': entry<{ file: string; encoding: 'utf-16le' | 'utf-16be' }>({
+    title: 'A UTF-16 file without a byte order mark',
+    severity: 'warning',
+    message: (a) => `${a.file} has no byte order mark, but the pattern of its zero bytes shows it is ${UTF16[a.encoding]}, so it was read as such`,
+    hint: () => `check the chapters and words that "vitrine check" lists; to be sure it is read as intended, ${RESAVE}`,
+    example: { file: 'texts/tale.txt', encoding: 'utf-16le' },
+  }),
+
   // ——— texts ———
   'text/unreadable': entry<{ reason: string }>({
     title: 'A text file cannot be read',
@@ -281,16 +327,6 @@ export const catalogue = {
     message: (a) => `the text file cannot be read (${a.reason})`,
     hint: () => 'check the path in the plan and the file permissions',
     example: { reason: 'EACCES' },
-  }),
-  'text/not-utf8': entry<{ detail: string }>({
-    title: 'A text that is not UTF-8',
-    severity: 'error',
-    message: (a) => a.detail,
-    hint: () => undefined,
-    example: {
-      detail:
-        'texts/tale.txt is not valid UTF-8: the byte 0xE9 at line 12, column 31 (byte offset 804) is not part of a UTF-8 character. Re-save the file as UTF-8 (in most editors: Save As, then choose the UTF-8 encoding) and build again.',
-    },
   }),
   'text/empty': entry<{ id: string; markers: boolean }>({
     title: 'A text with no words',

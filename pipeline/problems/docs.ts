@@ -11,6 +11,7 @@ import type { CatalogueEntry, ProblemCode } from './catalogue.ts';
 /** Headings for the first part of a code; a part not listed here is shown as it is. */
 const AREAS: Record<string, string> = {
   plan: 'The plan (exhibit.yaml)',
+  file: 'Reading files (texts, word lists, cast files, the plan)',
   text: 'Texts',
   lexicon: 'Word lists',
   dialogue: 'Dialogue',

@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
-import { decodeText } from '../text/decode.ts';
+import { readFileText } from '../text/decode.ts';
 import { buildTextModel } from '../text/build.ts';
 import { findMentions } from '../text/mentions.ts';
 import type { CastMember, Mentions, TextModel, TextOptions } from '../text/model.ts';
@@ -17,6 +17,8 @@ import { stableJson } from '../cache/cache.ts';
 export interface OpenedText {
   model: TextModel;
   mentions: Mentions;
+  /** Warnings from decoding the file (an encoding that was guessed). */
+  notes: Problem[];
 }
 
 type Memo = Map<string, OpenedText>;
@@ -36,7 +38,7 @@ export interface ReadText {
 }
 
 /**
- * Reads a text file. Problems (unreadable file, invalid UTF-8) are returned
+ * Reads a text file. Problems (unreadable file, bytes that are not text) are returned
  * with the file, line and column; the model itself is built lazily.
  */
 export function readText(
@@ -57,22 +59,19 @@ export function readText(
   const hash = hashBytes(bytes);
   const key = hash + stableJson({ options, cast });
   const seen = memo.get(key);
-  if (seen) return { text: { hash, open: () => seen }, problems: [] };
-  const decoded = decodeText(bytes, displayName);
-  if ('problem' in decoded) {
-    return {
-      text: null,
-      problems: [problem('text/not-utf8', { detail: decoded.problem.message }, { file: displayName, line: decoded.problem.line, column: decoded.problem.column })],
-    };
-  }
+  if (seen) return { text: { hash, open: () => seen }, problems: seen.notes.map((p) => ({ ...p, file: displayName })) };
+  const decoded = readFileText(bytes, displayName);
+  const problems = decoded.problems;
+  if (decoded.text === null) return { text: null, problems };
+  const source = decoded.text;
   const open = (): OpenedText => {
     let opened = memo.get(key);
     if (!opened) {
-      const model = buildTextModel(decoded.text, options);
-      opened = { model, mentions: findMentions(model, cast) };
+      const model = buildTextModel(source, options);
+      opened = { model, mentions: findMentions(model, cast), notes: problems };
       memo.set(key, opened);
     }
     return opened;
   };
-  return { text: { hash, open }, problems: [] };
+  return { text: { hash, open }, problems };
 }

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { createHash } from 'node:crypto';
-import { decodeText, firstInvalidByte } from '../../pipeline/text/decode.ts';
+import { decodeText, firstInvalidByte, readFileText } from '../../pipeline/text/decode.ts';
+import { formatProblem } from '../../pipeline/problems/problem.ts';
 import { buildTextModel } from '../../pipeline/text/build.ts';
 
 const bytes = (...b: number[]): Uint8Array => Uint8Array.from(b);
@@ -49,12 +50,12 @@ describe('firstInvalidByte', () => {
 
 describe('decodeText', () => {
   it('decodes UTF-8 and keeps a BOM (the model drops it)', () => {
-    expect(decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('Où?')), 'a.txt')).toEqual({ text: '\uFEFFOù?' });
+    expect(decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('Où?')))).toEqual({ text: '\uFEFFOù?', encoding: 'utf-8' });
   });
 
   it('keeps the bytes: the model hash of the decoded text is the sha256 of the file', () => {
     const file = concat(bytes(0xef, 0xbb, 0xbf), utf8('CHAPTER I.\r\n\r\nLa rivière monte.\r\n'));
-    const r = decodeText(file, 'a.txt');
+    const r = decodeText(file);
     expect('text' in r).toBe(true);
     if (!('text' in r)) return;
     expect(buildTextModel(r.text, { id: 'a' }).hash).toBe(createHash('sha256').update(file).digest('hex'));
@@ -62,20 +63,79 @@ describe('decodeText', () => {
 
   it('reports line and column of the first bad byte and asks for UTF-8', () => {
     // "Line one\r\nLine two\ncafé" with é in Latin-1 (0xE9): line 3, column 4.
-    const r = decodeText(concat(utf8('Line one\r\nLine two\ncaf'), bytes(0xe9), utf8('\nmore')), 'texts/weir.txt');
-    expect('problem' in r).toBe(true);
-    if (!('problem' in r)) return;
-    expect(r.problem.line).toBe(3);
-    expect(r.problem.column).toBe(4);
-    expect(r.problem.message).toContain('texts/weir.txt');
-    expect(r.problem.message).toContain('0xE9');
-    expect(r.problem.message).toMatch(/re-save the file as UTF-8/i);
+    const file = concat(utf8('Line one\r\nLine two\ncaf'), bytes(0xe9), utf8('\nmore'));
+    const r = decodeText(file);
+    expect('problem' in r && r.problem).toEqual({ code: 'not-utf8', byte: '0xE9', line: 3, column: 4, offset: 22 });
+    const read = readFileText(file, 'texts/weir.txt');
+    expect(read.text).toBeNull();
+    expect(read.problems.map(formatProblem)).toEqual([
+      'texts/weir.txt:3:4: texts/weir.txt is not valid UTF-8: the byte 0xE9 at line 3, column 4 (byte offset 22) is not part of a UTF-8 character (the file may be in Latin-1 or Windows-1252) — Re-save the file as UTF-8: open it in a text editor and save it again as UTF-8 (in most editors: Save As, then choose the "UTF-8" encoding), then run the command again',
+    ]);
   });
 
   it('counts columns in characters after multi-byte text, lone CR as a line end, BOM not counted', () => {
-    const r = decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('Ñandú\rÉté '), bytes(0xff)), 'x.txt');
+    const r = decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('Ñandú\rÉté '), bytes(0xff)));
     expect('problem' in r && [r.problem.line, r.problem.column]).toEqual([2, 5]);
-    const first = decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('ab'), bytes(0xc0)), 'x.txt');
+    const first = decodeText(concat(bytes(0xef, 0xbb, 0xbf), utf8('ab'), bytes(0xc0)));
     expect('problem' in first && [first.problem.line, first.problem.column]).toEqual([1, 3]);
+  });
+});
+
+describe('decodeText: UTF-16 and zero bytes', () => {
+  // Reference encoder: Node's Buffer ("utf16le"), the platform's own implementation of UTF-16.
+  const le = (s: string): Uint8Array => Uint8Array.from(Buffer.from(s, 'utf16le'));
+  const be = (s: string): Uint8Array => Uint8Array.from(Buffer.from(s, 'utf16le').swap16());
+  const tale = 'CHAPTER I.\r\n\r\nThe tide rose over the staithe, and Tamsin lit the lamps one by one.\r\n';
+
+  it.each([
+    ['little-endian with a byte order mark', concat(bytes(0xff, 0xfe), le(tale)), 'utf-16le', '\uFEFF' + tale, false],
+    ['big-endian with a byte order mark', concat(bytes(0xfe, 0xff), be(tale)), 'utf-16be', '\uFEFF' + tale, false],
+    ['little-endian without a byte order mark', le(tale), 'utf-16le', tale, true],
+    ['big-endian without a byte order mark', be(tale), 'utf-16be', tale, true],
+  ])('decodes UTF-16 %s', (_name, input, encoding, text, guessed) => {
+    const r = decodeText(input);
+    expect('text' in r && r).toMatchObject({ text, encoding });
+    expect('text' in r && r.note).toEqual(guessed ? { code: 'utf16-no-bom', encoding } : undefined);
+    const read = readFileText(input, 'texts/tale.txt');
+    expect(read.text).toBe(text);
+    expect(read.problems.map((p) => [p.severity, p.code, p.file])).toEqual(guessed ? [['warning', 'file/utf16-no-bom', 'texts/tale.txt']] : []);
+    if (guessed) expect(read.problems[0]!.message).toMatch(/the pattern of its zero bytes shows it is UTF-16/);
+  });
+
+  it('recognises BOM-less UTF-16 of a script whose letters have no zero byte, by its spaces and line ends', () => {
+    // Greek letters are U+0391–U+03C9: their high byte is 0x03, only spaces, punctuation and line ends give zero bytes.
+    const greek = 'Η παλίρροια ανέβηκε ως την αποβάθρα.\nΟ φανοκόρος άναψε τα φανάρια.\n';
+    const r = decodeText(le(greek));
+    expect('text' in r && [r.text, r.encoding]).toEqual([greek, 'utf-16le']);
+  });
+
+  it('refuses UTF-16 cut short by an odd byte, or holding half a character, with the position', () => {
+    const odd = decodeText(concat(bytes(0xff, 0xfe), le('Lamps\nlit'), bytes(0x41)));
+    expect('problem' in odd && odd.problem).toMatchObject({ code: 'bad-utf16', line: 2, column: 4 });
+    // A high surrogate followed by a letter: "ab\nc" then U+D83D then "d".
+    const lone = decodeText(concat(bytes(0xff, 0xfe), le('ab\nc'), bytes(0x3d, 0xd8), le('d')));
+    expect('problem' in lone && lone.problem).toMatchObject({ code: 'bad-utf16', line: 2, column: 2 });
+    const read = readFileText(concat(bytes(0xff, 0xfe), le('ab\nc'), bytes(0x3d, 0xd8), le('d')), 'a.txt');
+    expect(read.problems[0]!.message).toMatch(/half of a character with no other half/);
+  });
+
+  it('refuses zero bytes that do not follow the UTF-16 pattern, and UTF-32, saying where and what to do', () => {
+    const nul = decodeText(concat(utf8('The weir\nheld'), bytes(0), utf8(' fast.\n')));
+    expect('problem' in nul && nul.problem).toMatchObject({ code: 'zero-bytes', line: 2, column: 5 });
+    expect(readFileText(concat(utf8('The weir\nheld'), bytes(0), utf8(' fast.\n')), 'w.txt').problems[0]!.hint).toMatch(/save it again as UTF-8/);
+    // Source: The Unicode Standard, ch. 23.8, Table 23-4: the UTF-32 LE signature is FF FE 00 00.
+    const utf32 = decodeText(bytes(0xff, 0xfe, 0, 0, 0x41, 0, 0, 0));
+    expect('problem' in utf32 && utf32.problem.code).toBe('utf32');
+  });
+
+  it('reads a UTF-16 text into the same model as its UTF-8 original', () => {
+    const fromUtf8 = decodeText(utf8(tale));
+    const fromUtf16 = decodeText(le(tale));
+    if (!('text' in fromUtf8) || !('text' in fromUtf16)) throw new Error('both decode');
+    const a = buildTextModel(fromUtf8.text, { id: 'a' });
+    const b = buildTextModel(fromUtf16.text, { id: 'a' });
+    expect(b.vocab).toEqual(a.vocab);
+    expect(Array.from(b.tokens.start)).toEqual(Array.from(a.tokens.start));
+    expect(b.chapters.map((c) => c.title)).toEqual(a.chapters.map((c) => c.title));
   });
 });
