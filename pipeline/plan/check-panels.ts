@@ -4,13 +4,13 @@
  * and characters named in notes against the cast.
  */
 import type { z } from 'zod';
-import { issueProblems } from './issues.ts';
-import type { UnknownKeyWording } from './issues.ts';
+import { foldMisspeltKeys, wordIssues } from './issues.ts';
+import type { UnknownKeyWording, WordedIssue } from './issues.ts';
 import { asList, asRecord, asText, idsOf, panelsOf } from './raw.ts';
 import type { RawRecord, Reporter } from './raw.ts';
 import type { Registry } from './registry.ts';
 import { registryNames } from './registry.ts';
-import { allowedKeys, dropsUnknownKeys } from './schema-walk.ts';
+import { allowedKeys, dropsUnknownKeys, schemaAt } from './schema-walk.ts';
 import type { PathSegment } from './source.ts';
 import { suggestionHint } from './suggest.ts';
 import { wording } from '../problems/problem.ts';
@@ -36,35 +36,44 @@ interface Settings {
   unknownKey: UnknownKeyWording;
 }
 
-/** Validates params or options; returns the parsed output, or undefined when they are not valid. */
-function checkSettings(s: Settings, r: Reporter): { ok: boolean; output?: unknown } {
-  const value = s.value === undefined ? {} : s.value;
+/**
+ * Checks a measure's params or a chart's options against its schema, with
+ * the plan's wording: unknown keys with the nearest allowed name, wrong values
+ * with the expected type and the field's documented default. Paths are
+ * relative to the settings. `output` is set when they are valid.
+ */
+export function checkSettingsValue(
+  schema: z.ZodType,
+  value: unknown,
+  unknownKey: UnknownKeyWording,
+): { worded: WordedIssue[]; output?: unknown } {
+  const given = value === undefined ? {} : value;
   // Not a mapping: the plan schema already says so.
-  if (asRecord(value) === undefined) return { ok: false };
-  let ok = true;
-  if (dropsUnknownKeys(s.schema)) {
-    const allowed = allowedKeys(s.schema) ?? [];
-    for (const key of Object.keys(value as object)) {
+  if (asRecord(given) === undefined) return { worded: [] };
+  const worded: WordedIssue[] = [];
+  if (dropsUnknownKeys(schema)) {
+    const allowed = allowedKeys(schema) ?? [];
+    for (const key of Object.keys(given as object)) {
       if (allowed.includes(key)) continue;
-      ok = false;
-      r.reportKey(s.path, key, s.unknownKey.word(key, suggestionHint(key, allowed, s.unknownKey.plural)));
+      worded.push({ path: [key], key, wording: unknownKey.word(key, suggestionHint(key, allowed, unknownKey.plural)) });
     }
   }
-  const parsed = s.schema.safeParse(value);
+  const parsed = schema.safeParse(given);
   if (!parsed.success) {
-    r.problems.push(
-      ...issueProblems(parsed.error.issues, {
-        file: r.file,
-        source: r.source,
-        schema: s.schema,
-        value,
-        base: s.path,
-        unknownKey: s.unknownKey,
-      }),
-    );
-    return { ok: false };
+    const all = [...worded, ...wordIssues(parsed.error.issues, schema, given, unknownKey)];
+    return { worded: foldMisspeltKeys(all, (parent) => allowedKeys(schemaAt(schema, parent)) ?? []) };
   }
-  return ok ? { ok: true, output: parsed.data } : { ok: false };
+  return worded.length === 0 ? { worded, output: parsed.data } : { worded };
+}
+
+/** Validates params or options; returns the parsed output when they are valid. */
+function checkSettings(s: Settings, r: Reporter): { ok: boolean; output?: unknown } {
+  const done = checkSettingsValue(s.schema, s.value, s.unknownKey);
+  for (const { path, key, wording } of done.worded) {
+    if (key !== undefined) r.reportKey([...s.path, ...path.slice(0, -1)], key, wording);
+    else r.report([...s.path, ...path], wording);
+  }
+  return 'output' in done ? { ok: true, output: done.output } : { ok: false };
 }
 
 export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): PanelSettings {

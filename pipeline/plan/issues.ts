@@ -131,7 +131,7 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
         return wording('plan/too-many', { max, hint: about });
       }
       if (issue.origin === 'string') {
-        return wording('plan/too-long', { max, hint: about });
+        return wording('plan/too-long', { max, ...(typeof value === 'string' ? { length: value.length } : {}), hint: about });
       }
       const bound = issue.inclusive ? `${max} or less` : `less than ${max}`;
       return wording('plan/too-big', { bound, found: describeValue(value), hint: about });
@@ -147,8 +147,12 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
       });
     }
     case 'custom': {
-      const params = (issue.params ?? {}) as { hint?: unknown };
-      return wording('plan/invalid', { detail: issue.message, hint: typeof params.hint === 'string' ? params.hint : about });
+      const params = (issue.params ?? {}) as { hint?: unknown; code?: unknown };
+      const hint = typeof params.hint === 'string' ? params.hint : about;
+      // Checks in the schema that have a catalogue entry of their own name it in params.code.
+      if (params.code === 'plan/blank') return wording('plan/blank', {});
+      if (params.code === 'plan/bad-base') return wording('plan/bad-base', { detail: issue.message, hint: hint ?? '' });
+      return wording('plan/invalid', { detail: issue.message, hint });
     }
     case 'invalid_union':
       return wording('plan/invalid', { detail: `${describeValue(value)} matches none of the accepted forms`, hint: about });
@@ -157,32 +161,59 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
   }
 }
 
+/** A worded issue: where it is (relative to the checked value) and what to say. `key` is set for an unknown key (`path` then ends with it). */
+export interface WordedIssue {
+  path: PathSegment[];
+  key?: string;
+  wording: Wording;
+}
+
+/**
+ * A misspelt key is one fault, not two: when an unknown key is a near miss of
+ * a key that is missing, only the unknown key is reported, and its hint says
+ * the intended key is required.
+ */
+export function foldMisspeltKeys(worded: WordedIssue[], siblingsOf: (path: readonly PathSegment[]) => readonly string[]): WordedIssue[] {
+  const at = (path: readonly PathSegment[]) => JSON.stringify(path);
+  const missing = new Set(worded.filter((w) => w.wording.code === 'plan/missing-key').map((w) => at(w.path)));
+  const meant = new Set<string>();
+  const out = worded.map((w) => {
+    if (w.key === undefined) return w;
+    const parent = w.path.slice(0, -1);
+    const close = nearest(w.key, siblingsOf(parent));
+    if (close === undefined || !missing.has(at([...parent, close]))) return w;
+    meant.add(at([...parent, close]));
+    return { ...w, wording: { ...w.wording, hint: `did you mean "${close}"? ("${close}" is required)` } };
+  });
+  return out.filter((w) => !(w.wording.code === 'plan/missing-key' && meant.has(at(w.path))));
+}
+
+/** One wording per issue, and one per unknown key, with paths relative to the checked value. */
+export function wordIssues(issues: readonly Issue[], schema: z.ZodType, value: unknown, unknownKey: UnknownKeyWording): WordedIssue[] {
+  const out: WordedIssue[] = [];
+  for (const issue of issues) {
+    const rel = issue.path.filter((s): s is PathSegment => typeof s === 'string' || typeof s === 'number');
+    if (issue.code === 'unrecognized_keys') {
+      const allowed = allowedKeys(schemaAt(schema, rel)) ?? [];
+      for (const key of issue.keys) out.push({ path: [...rel, key], key, wording: unknownKey.word(key, suggestionHint(key, allowed, unknownKey.plural)) });
+      continue;
+    }
+    out.push({ path: rel, wording: wordIssue(issue, valueAt(value, rel), descriptionOf(schemaAt(schema, rel))) });
+  }
+  return foldMisspeltKeys(out, (parent) => allowedKeys(schemaAt(schema, parent)) ?? []);
+}
+
 function problem(ctx: IssueContext, path: readonly PathSegment[], line: number, column: number, w: Wording): Problem {
   const p: Problem = { severity: 'error', code: w.code, file: ctx.file, line, column, path: formatPath(path), message: w.message };
   if (w.hint !== undefined) p.hint = w.hint;
   return p;
 }
 
-/** One problem per issue, and one per unknown key. */
+/** One problem per issue, and one per unknown key, placed in the plan. */
 export function issueProblems(issues: readonly Issue[], ctx: IssueContext): Problem[] {
-  const out: Problem[] = [];
-  for (const issue of issues) {
-    const rel = issue.path.filter((s): s is PathSegment => typeof s === 'string' || typeof s === 'number');
-    const path = [...ctx.base, ...rel];
-    if (issue.code === 'unrecognized_keys') {
-      const allowed = allowedKeys(schemaAt(ctx.schema, rel)) ?? [];
-      for (const key of issue.keys) {
-        const pos = ctx.source.keyAt(path, key);
-        out.push(
-          problem(ctx, [...path, key], pos.line, pos.column, ctx.unknownKey.word(key, suggestionHint(key, allowed, ctx.unknownKey.plural))),
-        );
-      }
-      continue;
-    }
-    const value = valueAt(ctx.value, rel);
-    const wording = wordIssue(issue, value, descriptionOf(schemaAt(ctx.schema, rel)));
-    const pos = ctx.source.at(path);
-    out.push(problem(ctx, path, pos.line, pos.column, wording));
-  }
-  return out;
+  return wordIssues(issues, ctx.schema, ctx.value, ctx.unknownKey).map(({ path, key, wording }) => {
+    const full = [...ctx.base, ...path];
+    const pos = key !== undefined ? ctx.source.keyAt(full.slice(0, -1), key) : ctx.source.at(full);
+    return problem(ctx, full, pos.line, pos.column, wording);
+  });
 }

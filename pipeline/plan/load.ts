@@ -9,7 +9,7 @@ import path from 'node:path';
 import type { Problem } from '../problems/problem.ts';
 import { hasErrors, problem, sortProblems, wording } from '../problems/problem.ts';
 import { checkFiles } from './check-files.ts';
-import { checkSharedNames, checkUniqueIds } from './check-ids.ts';
+import { checkNameCharacters, checkSharedNames, checkUniqueIds } from './check-ids.ts';
 import { checkPanels } from './check-panels.ts';
 import { displayPath } from './files.ts';
 import { issueProblems } from './issues.ts';
@@ -18,6 +18,7 @@ import type { Registry } from './registry.ts';
 import { resolvePlan } from './resolve.ts';
 import { planSchema } from './schema.ts';
 import { readPlanSource } from './source.ts';
+import { readFileText } from '../text/decode.ts';
 import type { LoadOptions, PlanResult } from './types.ts';
 
 export type { LoadOptions, Plan, PlanResult } from './types.ts';
@@ -41,18 +42,22 @@ export async function loadPlan(planPath: string, registry: Registry, opts: LoadO
   const shownFile = displayPath(file, cwd);
   const done = (problems: Problem[], plan: PlanResult['plan'] = null): PlanResult => ({ plan, problems: sortProblems(problems), dir, file });
 
-  let text: string;
+  let bytes: Uint8Array;
   try {
-    text = await readFile(file, 'utf8');
+    bytes = await readFile(file);
   } catch (error) {
     return done([
       problem('plan/unreadable', { reason: reason(error) }, { file: shownFile }),
     ]);
   }
+  const decoded = readFileText(bytes, shownFile);
+  if (decoded.text === null) return done(decoded.problems);
+  let text = decoded.text;
   if (text.startsWith('\uFEFF')) text = text.slice(1);
 
   const source = readPlanSource(text);
-  const syntax = source.problems.map((p) => ({ ...p, file: shownFile }));
+  const syntax: Problem[] = source.problems.map((p) => ({ ...p, file: shownFile }));
+  syntax.push(...decoded.problems);
   if (source.data === undefined) return done(syntax);
   if (source.data === null) {
     return done([
@@ -81,6 +86,7 @@ export async function loadPlan(planPath: string, registry: Registry, opts: LoadO
 
   checkUniqueIds(raw, r);
   checkSharedNames(raw, r);
+  checkNameCharacters(raw, r);
   const settings = checkPanels(raw, registry, r);
   const files = await checkFiles(raw, dir, cwd, r);
 

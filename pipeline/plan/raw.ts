@@ -60,6 +60,8 @@ export interface Reporter {
   report(path: readonly PathSegment[], wording: Wording, severity?: Severity): void;
   /** A problem about the key `key` of the mapping at `path`, placed at the key. */
   reportKey(path: readonly PathSegment[], key: string, wording: Wording, severity?: Severity): void;
+  /** A problem about the value at `path`, placed at `pos` (e.g. one character inside it). */
+  reportAt(path: readonly PathSegment[], pos: Position, wording: Wording, severity?: Severity): void;
 }
 
 export function makeReporter(source: PlanSource, file: string): Reporter {
@@ -86,6 +88,9 @@ export function makeReporter(source: PlanSource, file: string): Reporter {
     },
     reportKey(path, key, wording, severity = 'error') {
       push([...path, key], source.keyAt(path, key), wording, severity);
+    },
+    reportAt(path, pos, wording, severity = 'error') {
+      push(path, pos, wording, severity);
     },
   };
 }

@@ -84,7 +84,12 @@ export function resolvePlan(input: ResolveInput): Plan {
     dir: input.dir,
     exhibit: { ...exhibit, ...(introFile ? { intro: introFile } : {}), ...(rightsFile ? { rights: rightsFile } : {}) },
     texts: data.texts.map((text, t) => ({ ...text, source: file(['texts', t, 'source'], text.source), where: where(['texts', t]) })),
-    cast: data.cast.map((member, c) => ({ ...member, where: where(['cast', c]) })),
+    cast: data.cast.map((member, c) => ({
+      ...member,
+      where: where(['cast', c]),
+      nameWhere: where(['cast', c, 'name']),
+      aliasWhere: member.aliases.map((_, k) => where(['cast', c, 'aliases', k])),
+    })),
     lexicons: data.lexicons.map((lex, l) => ({ ...lex, file: file(['lexicons', l, 'file'], lex.file), where: where(['lexicons', l]) })),
     rooms,
     panels: rooms.flatMap((room) => room.panels),

@@ -82,6 +82,11 @@ export function schemaAt(schema: z.ZodType, path: readonly PathSegment[]): z.Zod
   return current;
 }
 
+/** The kind of value a schema takes at heart ("string", "number", "enum", "array", …), past optional and default layers. */
+export function coreKind(schema: z.ZodType | undefined): string | undefined {
+  return schema === undefined ? undefined : defOf(core(schema)).type;
+}
+
 /** The keys a mapping schema allows, or undefined when it is not a fixed set (records, non-objects). */
 export function allowedKeys(schema: z.ZodType | undefined): string[] | undefined {
   if (schema === undefined) return undefined;

@@ -7,6 +7,7 @@
  * after the message.
  */
 import { z } from 'zod';
+import { BASE_HINT } from '../problems/catalogue.ts';
 
 /** Pattern every id follows: lower-case letters, digits and hyphens, not starting with a hyphen. */
 export const ID_PATTERN = /^[a-z0-9][a-z0-9-]*$/;
@@ -19,16 +20,73 @@ export const PLAN_VERSION = 1;
 
 /** An id: `[a-z0-9][a-z0-9-]*`. */
 export const idSchema = z.string().refine((s) => ID_PATTERN.test(s), {
-  error: (issue) => `${JSON.stringify(issue.input)} is not a valid id`,
+  error: (issue) => {
+    const input = String(issue.input);
+    const shown = JSON.stringify(input.length > 40 ? `${input.slice(0, 37)}…` : input);
+    const hidden = /[\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/u.exec(input);
+    return hidden
+      ? `${shown} is not a valid id: it holds the invisible character U+${hidden[0].codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`
+      : `${shown} is not a valid id`;
+  },
   params: {
     hint: 'ids use lower-case letters, digits and hyphens, and start with a letter or digit (e.g. "chapter-lengths")',
   },
 });
 
-const text = z.string().min(1);
+/**
+ * Longest values the plan accepts, in characters. Each is far above any
+ * sensible value; they are there so that a pasted file or a runaway
+ * value is refused with a message rather than copied onto every page (a 5 MB
+ * title once made a 224 MB site). Common practice, no source.
+ */
+export const LIMITS = {
+  /** Exhibit, room and panel titles; the organiser. */
+  title: 200,
+  /** Subtitles, credit lines, editions, licences, note texts, alt texts. */
+  prose: 2000,
+  /** Cast names and aliases, speech verbs. */
+  name: 200,
+  /** Trim markers, first words of a pinned quotation, chapter patterns. */
+  marker: 500,
+  /** File paths. */
+  path: 500,
+} as const;
+
+/** Invisible characters that change the direction text is shown in: embeddings, overrides and isolates. */
+export const BIDI_CONTROLS = /[\u202A-\u202E\u2066-\u2069]/u;
+
+/** Required text: not empty, not only white space, at most `max` characters. */
+function text(max: number) {
+  return z
+    .string()
+    .min(1)
+    .max(max)
+    .refine((s) => s === '' || s.trim() !== '', {
+      error: 'the value is only white space',
+      params: { code: 'plan/blank', hint: 'write a value, or remove it' },
+    });
+}
 
 /** A path to a file inside the exhibit folder, as the curator wrote it. */
-const filePath = z.string().min(1);
+const filePath = text(LIMITS.path);
+
+/**
+ * Why a base path cannot be used, or undefined when it can. The base must be
+ * a path on the site's own host: "//host/" and "http://…" would send every
+ * stylesheet and link off-site.
+ */
+export function basePathProblem(base: string): { message: string; hint: string } | undefined {
+  const hint = BASE_HINT;
+  const shown = JSON.stringify(base.length > 60 ? `${base.slice(0, 57)}…` : base);
+  if (/^[a-z][a-z0-9+.-]*:/i.test(base)) return { message: `the base path ${shown} is a web address, not a path`, hint };
+  if (base.startsWith('//') || base.startsWith('\\')) return { message: `the base path ${shown} names another host (it starts with "//"), so every page would load its stylesheets from there`, hint };
+  if (!base.startsWith('/') || !base.endsWith('/')) return { message: `the base path ${shown} must start and end with "/"`, hint };
+  if (/[\\?#\s"'<>`]|[\u0000-\u001f\u007f]/u.test(base) || BIDI_CONTROLS.test(base)) {
+    return { message: `the base path ${shown} holds a character that has no place in a path (a space, a backslash, "?", "#", a quotation mark or an invisible character)`, hint };
+  }
+  if (base.split('/').some((seg) => seg === '.' || seg === '..')) return { message: `the base path ${shown} holds a "." or ".." step`, hint };
+  return undefined;
+}
 
 function compiles(pattern: string): string | undefined {
   try {
@@ -41,9 +99,9 @@ function compiles(pattern: string): string | undefined {
 
 export const exhibitSchema = z
   .strictObject({
-    title: text.describe('Title of the exhibit. Required.'),
-    subtitle: text.optional().describe('Subtitle shown under the title. Optional, no default.'),
-    organiser: text.describe('Who puts the exhibit on (a person, circle or society). Required.'),
+    title: text(LIMITS.title).describe(`Title of the exhibit, at most ${LIMITS.title} characters. Required.`),
+    subtitle: text(LIMITS.prose).optional().describe(`Subtitle shown under the title, at most ${LIMITS.prose} characters. Optional, no default.`),
+    organiser: text(LIMITS.title).describe(`Who puts the exhibit on (a person, circle or society), at most ${LIMITS.title} characters. Required.`),
     language: z
       .string()
       .regex(/^[a-z]{2}$/, { error: 'the language must be a two-letter ISO 639-1 code in lower case, e.g. "en"' })
@@ -51,13 +109,14 @@ export const exhibitSchema = z
       .describe('ISO 639-1 code of the language of the texts. Default "en".'),
     base: z
       .string()
-      .refine((s) => s.startsWith('/') && s.endsWith('/'), {
-        error: (issue) => `the base path ${JSON.stringify(issue.input)} must start and end with "/"`,
-        params: { hint: 'write "/" for a site at the root of its domain, or e.g. "/weir/" for a sub-folder' },
+      .max(LIMITS.path)
+      .superRefine((base, ctx) => {
+        const wrong = basePathProblem(base);
+        if (wrong) ctx.addIssue({ code: 'custom', message: wrong.message, params: { code: 'plan/bad-base', hint: wrong.hint } });
       })
       .default('/')
-      .describe('Base path the site is served under; starts and ends with "/". Default "/".'),
-    credit: text.optional().describe('Credit line shown in the footer. Optional, no default.'),
+      .describe('Base path the site is served under: a path on the host that serves it, starting and ending with "/" (not a web address). Default "/".'),
+    credit: text(LIMITS.prose).optional().describe(`Credit line shown in the footer, at most ${LIMITS.prose} characters. Optional, no default.`),
     intro: filePath.optional().describe('MDX file shown on the home page, relative to the exhibit folder. Optional, no default.'),
     rights: filePath
       .optional()
@@ -68,7 +127,7 @@ export const exhibitSchema = z
 export const pinSchema = z
   .strictObject({
     chapter: z.number().int().positive().describe('Chapter of the quotation, 1-based. Required.'),
-    startsWith: text.describe('The first words of the quotation, as printed (without the opening mark). Required.'),
+    startsWith: text(LIMITS.marker).describe(`The first words of the quotation, as printed (without the opening mark), at most ${LIMITS.marker} characters. Required.`),
     speaker: idSchema.nullable().describe('Cast id of who speaks, or null for nobody in the cast. Required.'),
     addressee: idSchema.nullable().optional().describe('Cast id of who is spoken to, or null. Optional, no default (found by the rules).'),
   })
@@ -77,7 +136,7 @@ export const pinSchema = z
 export const dialogueSchema = z
   .strictObject({
     verbs: z
-      .array(text)
+      .array(text(LIMITS.name))
       .default([])
       .describe('Speech verbs to add to the built-in list (said, asked, cried, …), in their -ed or present form as printed. Default [] (none).'),
     pins: z.array(pinSchema).default([]).describe("Curator's corrections of speakers. Default [] (none)."),
@@ -88,7 +147,7 @@ export const lexiconSchema = z
   .strictObject({
     id: idSchema.describe('Id of the word list; measures name it in their "lexicon" parameter. Required.'),
     file: filePath.describe('A TSV or CSV file of words and categories, relative to the exhibit folder. Required.'),
-    licence: text.optional().describe('Licence or terms of the word list, shown in the credits. Optional, no default.'),
+    licence: text(LIMITS.prose).optional().describe(`Licence or terms of the word list, shown in the credits, at most ${LIMITS.prose} characters. Optional, no default.`),
   })
   .describe('A word list the curators supply (e.g. words and the emotions they evoke).');
 
@@ -97,13 +156,13 @@ export const textSchema = z
     id: idSchema.describe('Id of the text, unique among texts; panels name it in "text". Required.'),
     source: filePath.describe('The text file, relative to the exhibit folder. Required.'),
     format: z.enum(['plain']).default('plain').describe('Format of the text file; only "plain" in version 1. Default "plain".'),
-    start: text
+    start: text(LIMITS.marker)
       .optional()
       .describe('Trim marker: everything up to and including the first line containing it is dropped. Optional, no default (nothing dropped).'),
-    end: text
+    end: text(LIMITS.marker)
       .optional()
       .describe('Trim marker: everything from the first line containing it is dropped. Optional, no default (nothing dropped).'),
-    chapters: text
+    chapters: text(LIMITS.marker)
       .superRefine((pattern, ctx) => {
         const error = compiles(pattern);
         if (error !== undefined) {
@@ -116,7 +175,7 @@ export const textSchema = z
       })
       .optional()
       .describe('Chapter-heading pattern: a regular expression matched per line, ignoring case. Optional, no default (headings are found by the text reader).'),
-    edition: text.optional().describe('Note on the edition the text was taken from. Optional, no default.'),
+    edition: text(LIMITS.prose).optional().describe(`Note on the edition the text was taken from, at most ${LIMITS.prose} characters. Optional, no default.`),
     dialogue: dialogueSchema.default({ verbs: [], pins: [] }),
   })
   .describe('A text the exhibit reads.');
@@ -126,9 +185,9 @@ export const pronounSchema = z.enum(['he', 'she', 'they', 'it']);
 export const castMemberSchema = z
   .strictObject({
     id: idSchema.describe('Id of the character, unique within the cast; notes name it in "at: { character }". Required.'),
-    name: text.describe('Full name of the character as it appears in the text. Required.'),
+    name: text(LIMITS.name).describe(`Full name of the character as it appears in the text, at most ${LIMITS.name} characters. Required.`),
     aliases: z
-      .array(text)
+      .array(text(LIMITS.name))
       .default([])
       .describe('Other names the character goes by in the text. Default [] (none).'),
     pronoun: pronounSchema.optional().describe('Pronoun of the character: he, she, they or it. Optional, no default.'),
@@ -145,7 +204,7 @@ export const noteAnchorSchema = z
       .describe('Part (BOOK, PART, VOLUME) of a two-level text, 1-based; with `chapter`, the chapter is counted within the part ({ part: 2, chapter: 3 } is the third chapter of the second part). Optional.'),
     chapter: z.number().int().positive().optional().describe('Chapter number, 1-based, counted through the whole text (or within `part` when one is given). Optional.'),
     character: idSchema.optional().describe('Cast id of a character. Optional.'),
-    word: text.optional().describe('A word of the text. Optional.'),
+    word: text(LIMITS.name).optional().describe('A word of the text. Optional.'),
     segment: z.number().int().positive().optional().describe('Segment number, 1-based. Optional.'),
   })
   .superRefine((at, ctx) => {
@@ -171,29 +230,29 @@ export const noteAnchorSchema = z
 export const noteSchema = z
   .strictObject({
     at: noteAnchorSchema,
-    text: text.describe('The note itself. Required.'),
+    text: text(LIMITS.prose).describe(`The note itself, at most ${LIMITS.prose} characters. Required.`),
   })
   .describe('A curator note pinned to the data.');
 
 export const panelSchema = z
   .strictObject({
     id: idSchema.describe('Id of the panel, unique across the whole exhibit. Required.'),
-    title: text.describe('Title of the panel, usually a question. Required.'),
+    title: text(LIMITS.title).describe(`Title of the panel, usually a question, at most ${LIMITS.title} characters. Required.`),
     text: idSchema
       .optional()
       .describe('Id of the text the panel reads. Optional when the plan has exactly one text (that one is used).'),
-    measure: text.describe('Name of a registered measure. Required.'),
+    measure: text(LIMITS.name).describe('Name of a registered measure. Required.'),
     params: z
       .record(z.string(), z.unknown())
       .default({})
       .describe("Parameters of the measure, checked by the measure's own schema. Default {} (the measure's defaults)."),
-    chart: text.describe('Chart kind the measure is drawn as; must be one the measure supports. Required.'),
+    chart: text(LIMITS.name).describe('Chart kind the measure is drawn as; must be one the measure supports. Required.'),
     options: z
       .record(z.string(), z.unknown())
       .default({})
       .describe("Options of the chart, checked by the chart's own schema. Default {} (the chart's defaults)."),
     caption: filePath.describe('MDX (or .md) caption file, relative to the exhibit folder. Required.'),
-    alt: text.optional().describe('Replaces the generated alt text of the chart. Optional, no default.'),
+    alt: text(LIMITS.prose).optional().describe(`Replaces the generated alt text of the chart, at most ${LIMITS.prose} characters. Optional, no default.`),
     notes: z.array(noteSchema).default([]).describe('Curator notes pinned to the data. Default [] (none).'),
   })
   .describe('A panel: one measure drawn as one chart, with its caption.');
@@ -206,7 +265,7 @@ export const roomSchema = z
         params: { hint: `choose another id; reserved: ${RESERVED_ROOM_IDS.join(', ')}` },
       })
       .describe(`Id of the room, unique among rooms; not one of ${RESERVED_ROOM_IDS.join(', ')}. Required.`),
-    title: text.describe('Title of the room. Required.'),
+    title: text(LIMITS.title).describe(`Title of the room, at most ${LIMITS.title} characters. Required.`),
     intro: filePath.optional().describe('MDX file introducing the room, relative to the exhibit folder. Optional, no default.'),
     panels: z.array(panelSchema).min(1).describe('The panels of the room, in order. One or more.'),
   })

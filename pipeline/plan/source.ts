@@ -4,7 +4,7 @@
  * show them.
  */
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, visit } from 'yaml';
-import type { Document, Node as YamlNode } from 'yaml';
+import type { Document, Node as YamlNode, YAMLError } from 'yaml';
 import type { Problem } from '../problems/problem.ts';
 import { problem } from '../problems/problem.ts';
 import { wordYamlError } from './yaml-messages.ts';
@@ -26,6 +26,8 @@ export interface PlanSource {
   at(path: readonly PathSegment[]): Position;
   /** Where the key `key` of the mapping at `path` is written (falls back to `at(path)`). */
   keyAt(path: readonly PathSegment[], key: string): Position;
+  /** Where `needle` is first written inside the value at `path` (falls back to `at(path)`, e.g. when it is written as an escape). */
+  find(path: readonly PathSegment[], needle: string): Position;
 }
 
 const SIMPLE_KEY = /^[A-Za-z_][A-Za-z0-9_-]*$/;
@@ -106,6 +108,90 @@ function keyAtOffset(doc: Document, offset: number): { path: PathSegment[] } | u
   return search(doc.contents, []);
 }
 
+/** A [ list ] or { mapping } left open. */
+function isUnclosedFlow(error: YAMLError): boolean {
+  return (error.code === 'MISSING_CHAR' && /Flow (map|sequence)/i.test(error.message)) || (error.code === 'BAD_INDENT' && /flow/i.test(error.message));
+}
+
+/** Errors after which the parser reads the rest of the file wrongly, whatever follows. */
+function swallowsTheRest(error: YAMLError): boolean {
+  return isUnclosedFlow(error) || (error.code === 'MISSING_CHAR' && /quote/i.test(error.message));
+}
+
+/**
+ * The offset of the last [ or { before `offset` that is still open there, or
+ * undefined. Reads the YAML roughly, as far as brackets go: quoted scalars
+ * (a quotation mark that starts a value) and comments are skipped, and the
+ * scan starts at the top-level section holding `offset`.
+ */
+export function unclosedBracket(text: string, offset: number): number | undefined {
+  let from = 0;
+  for (const m of text.slice(0, offset).matchAll(/^[^\s#]/gm)) from = m.index;
+  const open: number[] = [];
+  let i = from;
+  while (i < offset) {
+    const c = text[i]!;
+    if (c === '#' && (i === 0 || /\s/.test(text[i - 1]!))) {
+      const end = text.indexOf('\n', i);
+      i = end < 0 ? offset : end;
+      continue;
+    }
+    if (c === '"' || c === "'") {
+      // Only a mark that begins a value starts a quoted scalar ("Ferryman's" is plain text).
+      const before = text.slice(text.lastIndexOf('\n', i - 1) + 1, i).trimEnd();
+      if (before === '' || /[:\-[{,]$/.test(before)) {
+        let j = i + 1;
+        while (j < offset) {
+          if (c === '"' && text[j] === '\\') j += 2;
+          else if (text[j] === c && c === "'" && text[j + 1] === "'") j += 2;
+          else if (text[j] === c) break;
+          else j++;
+        }
+        i = j + 1;
+        continue;
+      }
+    }
+    if (c === '[' || c === '{') open.push(i);
+    else if ((c === ']' || c === '}') && open.length > 0) open.pop();
+    i++;
+  }
+  return open.at(-1);
+}
+
+/**
+ * One fault, one message: the parser reports many errors after the first one
+ * (a tab used for indentation gives a dozen, as every line below it seems out
+ * of place), and all but the first are echoes. The file is read in regions,
+ * each a top-level section (from a line starting in column 1 to the next);
+ * only the first syntax error of a region is kept. An unclosed bracket or
+ * quotation mark makes the rest of the file one region. Duplicate keys open
+ * no region (the parser reads on correctly after them), so all of them are
+ * kept, except inside the region of a syntax error, where they are echoes too.
+ */
+export function firstOfEachRegion(errors: readonly YAMLError[], text: string): YAMLError[] {
+  const topLevel: number[] = [];
+  for (const m of text.matchAll(/^[^\s#]/gm)) topLevel.push(m.index);
+  const regionEnd = (offset: number): number => topLevel.find((start) => start > offset) ?? Infinity;
+  const out: YAMLError[] = [];
+  let end = -1;
+  let opened = -1; // index in `out` of the error that opened the current region
+  for (const error of [...errors].sort((a, b) => a.pos[0] - b.pos[0])) {
+    if (error.pos[0] < end) {
+      // A tab in the indentation is the cause of whatever the parser said just before it on that account.
+      if (error.code === 'TAB_AS_INDENT' && out[opened]!.code !== 'TAB_AS_INDENT') out[opened] = error;
+      continue;
+    }
+    if (error.code === 'DUPLICATE_KEY') {
+      out.push(error);
+      continue;
+    }
+    opened = out.push(error) - 1;
+    // The region runs from the start of the error's line to the next top-level line.
+    end = swallowsTheRest(error) ? Infinity : regionEnd(error.pos[0]);
+  }
+  return out;
+}
+
 export function readPlanSource(text: string): PlanSource {
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false });
@@ -137,7 +223,7 @@ export function readPlanSource(text: string): PlanSource {
   };
 
   const problems: Problem[] = [];
-  for (const error of doc.errors) {
+  for (const error of firstOfEachRegion(doc.errors, text)) {
     const p = pos(error.pos[0]);
     const worded = wordYamlError(error);
     if (worded === 'duplicate-key') {
@@ -148,7 +234,23 @@ export function readPlanSource(text: string): PlanSource {
           : problem('plan/duplicate-key', {}, { line: p.line, column: p.column }),
       );
     } else {
-      problems.push(problem('plan/yaml-syntax', worded, { line: p.line, column: p.column }));
+      const opener = isUnclosedFlow(error) ? unclosedBracket(text, error.pos[0]) : undefined;
+      if (opener === undefined) problems.push(problem('plan/yaml-syntax', worded, { line: p.line, column: p.column }));
+      else {
+        // The parser notices where the brackets should have closed; the fault is where they opened.
+        const at = pos(opener);
+        const brace = text[opener] === '{';
+        problems.push(
+          problem(
+            'plan/yaml-syntax',
+            {
+              detail: `${brace ? 'the { mapping }' : 'the [ list ]'} that opens here is not closed`,
+              hint: `add the closing ${brace ? '}' : ']'}; if the value goes on over several lines, indent them further than its key`,
+            },
+            { line: at.line, column: at.column },
+          ),
+        );
+      }
     }
   }
 
@@ -183,5 +285,15 @@ export function readPlanSource(text: string): PlanSource {
     }
   }
 
-  return { data, problems, at, keyAt };
+  const find = (path: readonly PathSegment[], needle: string): Position => {
+    const { found, complete } = walk(path);
+    const range = complete ? found.node?.range : undefined;
+    if (range) {
+      const k = text.slice(range[0], range[1]).indexOf(needle);
+      if (k >= 0) return pos(range[0] + k);
+    }
+    return at(path);
+  };
+
+  return { data, problems, at, keyAt, find };
 }

@@ -69,6 +69,9 @@ export interface PlanCastMember {
   aliases: string[];
   pronoun?: Pronoun;
   where: Where;
+  /** Where the name and each alias are written. */
+  nameWhere: Where;
+  aliasWhere: Where[];
 }
 
 export interface PlanNote {

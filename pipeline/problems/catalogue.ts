@@ -34,6 +34,9 @@ const given = (a: { hint?: string }): string | undefined => a.hint;
 const STAY_INSIDE = (dir: string) => `paths must stay inside the exhibit folder (${dir}); move the file into it and write the path relative to it`;
 const NOT_WELL_FORMED = 'the YAML is not well-formed here';
 const RESAVE = 'open it in a text editor and save it again as UTF-8 (in most editors: Save As, then choose the "UTF-8" encoding), then run the command again';
+/** What to write as a base path: shared by the plan's check and --base. */
+export const BASE_HINT =
+  'write only the path the site is served under, starting and ending with "/": "/" for the root of its domain, or e.g. "/weir/" for a sub-folder (the host name comes from wherever the site is served)';
 const UTF16 = { 'utf-16le': 'UTF-16 (little-endian)', 'utf-16be': 'UTF-16 (big-endian)' } as const;
 
 export const catalogue = {
@@ -117,12 +120,29 @@ export const catalogue = {
     hint: given,
     example: { min: 3 },
   }),
-  'plan/too-long': entry<{ max: number; hint?: string }>({
+  'plan/too-long': entry<{ max: number; length?: number; hint?: string }>({
     title: 'A text that is too long',
     severity: 'error',
-    message: (a) => `the text may be at most ${a.max} characters long`,
+    message: (a) => `the text may be at most ${a.max.toLocaleString('en-GB')} characters long${a.length !== undefined ? `, and this one has ${a.length.toLocaleString('en-GB')}` : ''}`,
+    hint: (a) => (a.hint === undefined ? 'shorten it' : `shorten it (${a.hint})`),
+    example: { max: 200, length: 5_242_880, hint: 'Title of the exhibit, at most 200 characters. Required.' },
+  }),
+  'plan/blank': entry<Record<string, never>>({
+    title: 'A value of white space only',
+    severity: 'error',
+    message: () => 'the value is only white space',
+    hint: () => 'write a value, or remove it',
+    example: {},
+  }),
+  'plan/bad-base': entry<{ detail: string; hint: string }>({
+    title: 'A base that is not a path',
+    severity: 'error',
+    message: (a) => a.detail,
     hint: given,
-    example: { max: 200 },
+    example: {
+      detail: 'the base path "//cdn.example/" names another host (it starts with "//"), so every page would load its stylesheets from there',
+      hint: BASE_HINT,
+    },
   }),
   'plan/too-small': entry<{ bound: string; found: string; hint?: string }>({
     title: 'A number that is too small',
@@ -160,6 +180,14 @@ export const catalogue = {
     message: (a) => `the ${a.label} id "${a.id}" is used more than once`,
     hint: (a) => `it is first used on line ${a.line}; give each ${a.label} its own id`,
     example: { label: 'panel', id: 'who-appears', line: 41 },
+  }),
+  'cast/direction-control': entry<{ what: 'name' | 'alias'; code: string; control: string; index: number }>({
+    title: 'An invisible direction control in a name',
+    severity: 'error',
+    message: (a) =>
+      `the ${a.what} holds an invisible direction control, ${a.code} ${a.control} (character ${a.index}), which changes how the letters around it are shown and never matches the text`,
+    hint: (a) => `delete it: retype the ${a.what}, or copy it again from the text`,
+    example: { what: 'name', code: 'U+202E', control: 'RIGHT-TO-LEFT OVERRIDE', index: 5 },
   }),
   'plan/shared-alias': entry<{ name: string; first: string; second: string }>({
     title: 'Two characters share a name',
@@ -480,9 +508,16 @@ export const catalogue = {
   'cast/unreadable': entry<{ reason: string }>({
     title: 'A cast file cannot be read',
     severity: 'error',
-    message: (a) => `the cast file cannot be read: ${a.reason}`,
-    hint: () => undefined,
-    example: { reason: "ENOENT: no such file or directory, open 'cast.yaml'" },
+    message: (a) => `the cast file cannot be read (${a.reason})`,
+    hint: () => 'check the path given to --cast',
+    example: { reason: 'ENOENT' },
+  }),
+  'cast/not-a-list': entry<Record<string, never>>({
+    title: 'A cast file that is not a list',
+    severity: 'error',
+    message: () => 'the cast file does not hold a list',
+    hint: () => 'a cast file is a YAML list of entries, each "- { id: …, name: …, aliases: [ … ], pronoun: … }"',
+    example: {},
   }),
   'cast/invalid': entry<{ detail: string }>({
     title: 'A cast file entry that is not valid',

@@ -62,6 +62,8 @@ export interface ExhibitJobs {
   };
   texts: TextJob[];
   cast: CastMember[];
+  /** Per cast member: where its name and each alias are written in the plan. */
+  castPlaces: { name: Where; aliases: Where[] }[];
   lexicons: LexiconJob[];
   rooms: { id: string; title: string; intro: string | null; panels: PanelJob[] }[];
 }
@@ -110,6 +112,7 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
       where: l.where,
     })),
     cast: plan.cast.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, ...(c.pronoun ? { pronoun: c.pronoun } : {}) })),
+    castPlaces: plan.cast.map((c) => ({ name: c.nameWhere, aliases: c.aliasWhere })),
     rooms: plan.rooms.map((r) => ({
       id: r.id,
       title: r.title,

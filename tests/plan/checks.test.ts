@@ -303,7 +303,7 @@ describe('plan-level checks', () => {
     expect(errors(r).map(where)).toEqual([
       [1, 10, 'version', 'plan/invalid-value'],
       [5, 13, 'exhibit.language', 'plan/bad-format'],
-      [6, 9, 'exhibit.base', 'plan/invalid'],
+      [6, 9, 'exhibit.base', 'plan/bad-base'],
       [10, 15, 'texts[0].chapters', 'plan/invalid'],
     ]);
     expect(r.problems[3].message).toMatch(/^the chapter pattern is not a valid regular expression/);

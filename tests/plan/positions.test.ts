@@ -136,7 +136,7 @@ describe('several problems in one run', () => {
     const result = await loadPlan('tests/fixtures/plans/errors/exhibit.yaml', fakeRegistry, { cwd: repo });
     const lines = result.problems.map(formatProblem);
     const file = 'tests/fixtures/plans/errors/exhibit.yaml';
-    expect(lines).toContain(`${file}:3:3 exhibit.title: "title" is missing — add "title:" here (Title of the exhibit. Required.)`);
+    expect(lines).toContain(`${file}:3:3 exhibit.title: "title" is missing — add "title:" here (Title of the exhibit, at most 200 characters. Required.)`);
     expect(lines).toContain(
       `${file}:9:13 texts[1].source: the text path "../secret.txt" leads outside the exhibit folder — paths must stay inside the exhibit folder (tests/fixtures/plans/errors); move the file into it and write the path relative to it`,
     );
