@@ -13,6 +13,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
+import { z } from 'zod';
 
 import { loadPlan } from './plan/load.ts';
 import type { Problem, ProblemPlace } from './problems/problem.ts';
@@ -27,6 +28,7 @@ import { findQuotes } from './dialogue/quotes.ts';
 import { charts } from './charts/index.ts';
 import type { ChartData, PinnedNote } from './charts/types.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
+import type { CacheCheck } from './cache/cache.ts';
 import { readText } from './stages/read-text.ts';
 import type { ReadText } from './stages/read-text.ts';
 import type { CastMember, HeadingReport, TextOptions, TrimmedLines } from './text/model.ts';
@@ -35,6 +37,23 @@ import type { StructureResult } from './measures/structure.ts';
 import { planJobs } from './stages/jobs.ts';
 import type { ExhibitJobs, PanelJob, TextJob, Where } from './stages/jobs.ts';
 import { paramDocs } from './stages/param-docs.ts';
+import { READING_VERSION, readingProblems, readingReport, readingReportSchema } from './stages/reading.ts';
+
+/** What stage 2 and the notes read of a cached structure result; anything else there is computed again. */
+const structureShape = z.object({
+  words: z.number(),
+  chapters: z.array(z.object({ number: z.number(), title: z.string(), part: z.string().nullable(), words: z.number() })),
+});
+
+/** A cache check from a schema: null when the value fits, otherwise where and how it does not. */
+function shapeCheck(schema: z.ZodType): CacheCheck {
+  return (value) => {
+    const r = schema.safeParse(value);
+    if (r.success) return null;
+    const issue = r.error.issues[0]!;
+    return `${issue.path.join('.') || 'the value'}: ${issue.message}`;
+  };
+}
 
 export const GENERATOR = 'Vitrine 0.1.0';
 
@@ -102,7 +121,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   const watch = [loaded.file];
   const empty = (): PrepareResult => ({
     prepared: null,
-    problems: sortProblems(problems),
+    problems: sortProblems([...problems, ...cache.problems()]),
     dir: loaded.dir,
     watch,
     texts: [],
@@ -120,9 +139,33 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     const { text, problems: textProblems } = readText(t.file, t.display, t.options, jobs.cast);
     problems.push(...textProblems.map((p) => ({ ...p, path: p.path ?? t.where.path })));
     if (!text) continue;
-    const structure = cache.get(key(text.hash, t.options, measures.structure!, {}, jobs.cast, language), () =>
-      measures.structure!.compute(contextOf(text, jobs.cast, language), {}),
+    const structure = cache.get(
+      key(text.hash, t.options, measures.structure!, {}, jobs.cast, language),
+      () => measures.structure!.compute(contextOf(text, jobs.cast, language), {}),
+      shapeCheck(structureShape),
     ) as StructureResult;
+    const report = cache.get(
+      cacheKey({ textHash: text.hash, textOptions: t.options, measure: 'reading', version: READING_VERSION, params: {}, cast: jobs.cast, language }),
+      () => {
+        const { model, mentions } = text.open();
+        return readingReport(model, mentions, jobs.cast);
+      },
+      shapeCheck(readingReportSchema),
+    );
+    problems.push(
+      ...readingProblems(report, {
+        id: t.id,
+        display: t.display,
+        where: t.where,
+        trimmed: t.options.start !== undefined || t.options.end !== undefined,
+        pattern: t.options.chapterPattern !== undefined,
+        cast: jobs.cast,
+        castPlaces: jobs.castPlaces,
+        language,
+      }),
+    );
+    // An empty text has nothing to check further: its pins and panels would only repeat the fault.
+    if (report.words === 0) continue;
     states.set(t.id, { job: t, read: text, structure });
   }
   const lexicons = readLexicons(jobs.lexicons, problems);
@@ -201,7 +244,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   };
   return {
     prepared,
-    problems: sortProblems(problems),
+    problems: sortProblems([...problems, ...cache.problems()]),
     dir: loaded.dir,
     watch,
     texts: opts.summarise ? [...states.values()].map((s) => summarise(s, jobs.cast)) : [],
@@ -263,23 +306,60 @@ function preparePanel(
 ): { panel: PreparedPanel; computed: boolean } | null {
   const m = measures[job.measure]!;
   const misses = cache.stats.misses;
+  const extras: Extras = { dialogue: state.job.dialogue, lexicons };
+  const compute = () => m.compute(contextOf(state.read, jobs.cast, language, extras), job.params);
   let result: unknown;
   try {
-    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache, {
-      dialogue: state.job.dialogue,
-      lexicons,
-    });
+    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache, extras);
   } catch (e) {
     problems.push(atWhere(job.measureWhere, 'panel/measure-failed', { measure: job.measure, reason: (e as Error).message }));
     return null;
   }
+  let shown: ReturnType<typeof presentPanel>;
+  try {
+    shown = presentPanel(job, result, state, jobs.cast);
+  } catch (e) {
+    // A result read back from the cache that the chart cannot use (an entry of the wrong
+    // shape) is computed again; a freshly computed one that fails is a fault of the program.
+    if (cache.stats.misses > misses) throw e;
+    result = cache.refresh(key(state.read.hash, state.job.options, m, job.params, jobs.cast, language, extras), compute, `drawing it failed: ${(e as Error).message}`);
+    shown = presentPanel(job, result, state, jobs.cast);
+  }
+  problems.push(...shown.problems);
+  return {
+    computed: cache.stats.misses > misses,
+    panel: {
+      id: job.id,
+      room: job.room,
+      title: job.title,
+      text: job.text,
+      measure: job.measure,
+      params: job.params,
+      chart: job.chart,
+      options: job.options,
+      svg: shown.out.svg,
+      svgNarrow: shown.out.svgNarrow ?? null,
+      alt: job.alt ?? shown.out.alt,
+      table: shown.table,
+      notes: shown.notes,
+      caption: job.caption,
+      data: result,
+      citation: '',
+    },
+  };
+}
+
+/** The chart, table and notes of a panel from its measure's result. Throws when the result does not fit the chart. */
+function presentPanel(job: PanelJob, result: unknown, state: TextState, cast: CastMember[]) {
+  const m = measures[job.measure]!;
+  const problems: Problem[] = [];
   const data = m.views[job.chart]!(result, job.params);
   const notes: PinnedNote[] = [];
   const prepNotes: PreparedNote[] = [];
   job.notes.forEach((n, i) => {
     const label = String(i + 1);
     const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
-    const resolved = resolveNote(n.at, data, state.structure, jobs.cast, segments);
+    const resolved = resolveNote(n.at, data, state.structure, cast, segments);
     if ('problem' in resolved) {
       problems.push(atWhere(n.where, 'note/unresolved', { detail: resolved.problem, hint: resolved.hint }));
       return;
@@ -299,27 +379,7 @@ function preparePanel(
     const n = byLabel.get(label);
     if (n) problems.push(atWhere(n.where, 'note/not-drawn', {}));
   }
-  return {
-    computed: cache.stats.misses > misses,
-    panel: {
-      id: job.id,
-      room: job.room,
-      title: job.title,
-      text: job.text,
-      measure: job.measure,
-      params: job.params,
-      chart: job.chart,
-      options: job.options,
-      svg: out.svg,
-      svgNarrow: out.svgNarrow ?? null,
-      alt: job.alt ?? out.alt,
-      table: m.table(result, job.params),
-      notes: prepNotes,
-      caption: job.caption,
-      data: result,
-      citation: '',
-    },
-  };
+  return { out, table: m.table(result, job.params), notes: prepNotes, problems };
 }
 
 type NoteAt = { part?: number; chapter?: number; character?: string; word?: string; segment?: number };
@@ -491,16 +551,8 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
     outside: (model.skipped ?? []).map((r) => ({ from: r.line, to: model.position(Math.max(r.start, r.end - 1)).line })),
     cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
     ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
+    // The text model's own warnings are reported with the reading (stage 2), cache or no cache.
     warnings: [
-      ...model.warnings.map((w): Problem => ({
-        severity: 'warning',
-        code: w.code,
-        file: s.job.display,
-        ...(w.line !== undefined ? { line: w.line } : {}),
-        ...(w.column !== undefined ? { column: w.column } : {}),
-        message: w.message,
-        ...(w.hint !== undefined ? { hint: w.hint } : {}),
-      })),
       // Unbalanced quotation marks: the rest of the text is still read.
       ...(cast.length
         ? findQuotes(model, s.job.dialogue.verbs).problems.map((q) =>

@@ -37,6 +37,10 @@ const RESAVE = 'open it in a text editor and save it again as UTF-8 (in most edi
 /** What to write as a base path: shared by the plan's check and --base. */
 export const BASE_HINT =
   'write only the path the site is served under, starting and ending with "/": "/" for the root of its domain, or e.g. "/weir/" for a sub-folder (the host name comes from wherever the site is served)';
+const plural = (n: number, word: string): string => `${n.toLocaleString('en-GB')} ${word}${n === 1 ? '' : 's'}`;
+/** How often an alias matched, against the character's other names. */
+const tally = (a: { text: string; count: number; others: number; name: string }): string =>
+  `in "${a.text}" it matched ${plural(a.count, 'time')}, against ${plural(a.others, 'time')} for all the other names of ${a.name} together`;
 const UTF16 = { 'utf-16le': 'UTF-16 (little-endian)', 'utf-16be': 'UTF-16 (big-endian)' } as const;
 
 export const catalogue = {
@@ -180,6 +184,20 @@ export const catalogue = {
     message: (a) => `the ${a.label} id "${a.id}" is used more than once`,
     hint: (a) => `it is first used on line ${a.line}; give each ${a.label} its own id`,
     example: { label: 'panel', id: 'who-appears', line: 41 },
+  }),
+  'cast/common-word-alias': entry<{ alias: string; id: string; name: string; text: string; count: number; others: number }>({
+    title: 'An alias that is a common word',
+    severity: 'warning',
+    message: (a) => `the alias "${a.alias}" of "${a.id}" is a common word, so it counts every "${a.alias}" in the text as ${a.name}: ${tally(a)}`,
+    hint: () => 'remove it, or make it a phrase only this character is called (e.g. "the old lamplighter")',
+    example: { alias: 'the', id: 'tamsin', name: 'Tamsin Rook', text: 'lamps', count: 647, others: 30 },
+  }),
+  'cast/dominant-alias': entry<{ alias: string; id: string; name: string; text: string; count: number; others: number; multiple: number; file: string }>({
+    title: 'An alias that outnumbers all the other names',
+    severity: 'warning',
+    message: (a) => `the alias "${a.alias}" of "${a.id}" matches more than ${a.multiple} times as often as the character's other names: ${tally(a)}`,
+    hint: (a) => `look at a few of its places (vitrine measure --text ${a.file} --measure concordance --param node="${a.alias}"); if it also stands for other things, remove it or make it longer`,
+    example: { alias: 'lamp', id: 'tamsin', name: 'Tamsin Rook', text: 'lamps', count: 212, others: 9, multiple: 10, file: 'content/texts/the-lamps-of-wendle-staithe.txt' },
   }),
   'cast/direction-control': entry<{ what: 'name' | 'alias'; code: string; control: string; index: number }>({
     title: 'An invisible direction control in a name',
@@ -358,10 +376,21 @@ export const catalogue = {
   }),
   'text/empty': entry<{ id: string; markers: boolean }>({
     title: 'A text with no words',
-    severity: 'warning',
-    message: (a) => `The text "${a.id}" has no words${a.markers ? ' between its start and end markers' : ''}. Check the file and the markers.`,
-    hint: () => undefined,
+    severity: 'error',
+    message: (a) => `the text "${a.id}" has no words${a.markers ? ' between its start and end markers' : ''}, so there is nothing to measure`,
+    hint: (a) =>
+      a.markers
+        ? 'check that the "start:" and "end:" markers in the plan match lines of the text, and that the text lies between them'
+        : 'check that this is the right file and that it holds the text itself (not an empty file, or one with only headings or punctuation)',
     example: { id: 'lamps', markers: true },
+  }),
+  'text/no-headings': entry<{ id: string }>({
+    title: 'A text in which no chapter headings were found',
+    severity: 'warning',
+    message: (a) => `no chapter headings were found in the text "${a.id}", so the whole text is read as one chapter, "Whole text"`,
+    hint: () =>
+      'if it has chapters, put each heading on a line of its own with a blank line before and after (e.g. "CHAPTER IV." or "Chapter 4: The Night of the High Water"), or give the text a "chapters:" pattern in the plan that its heading lines match; if it has none, nothing needs doing',
+    example: { id: 'lamps' },
   }),
   'text/marker-not-found': entry<{ id: string; marker: string; end: 'start' | 'end'; after?: number }>({
     title: 'A trim marker that is not in the text',
@@ -476,6 +505,31 @@ export const catalogue = {
     message: () => 'the note could not be placed on the chart, so it is shown only beside it',
     hint: () => 'point it at something the chart draws',
     example: {},
+  }),
+
+  // ——— the result cache ———
+  'cache/unusable-folder': entry<{ blocked: boolean; reason: string }>({
+    title: 'A cache folder that cannot be used',
+    severity: 'warning',
+    message: (a) =>
+      `the cache folder cannot be used: ${a.blocked ? 'it, or a folder above it, is a file' : `it cannot be made (${a.reason})`}; every measure was computed afresh and nothing was kept`,
+    hint: () => 'rename or remove the file in the way (the cache is a folder, normally .vitrine/cache), or run with --no-cache',
+    example: { blocked: true, reason: 'EEXIST' },
+  }),
+  'cache/bad-entry': entry<{ count: number; reason: string }>({
+    title: 'Cached results that could not be used',
+    severity: 'warning',
+    message: (a) =>
+      `${a.count === 1 ? 'a cached result' : `${a.count} cached results`} could not be used (${a.reason}${a.count > 1 ? ', and others' : ''}), so ${a.count === 1 ? 'it was' : 'they were'} computed again and saved afresh`,
+    hint: () => 'nothing needs doing; if this comes back on every run, delete the cache folder (it holds nothing that cannot be computed again)',
+    example: { count: 1, reason: 'it is not complete JSON' },
+  }),
+  'cache/not-written': entry<{ reason: string }>({
+    title: 'Results that could not be saved in the cache',
+    severity: 'warning',
+    message: (a) => `measure results could not be saved in the cache (${a.reason}); this run is not affected, but the next one will compute them again`,
+    hint: () => 'check that the cache folder can be written and the disk is not full, or run with --no-cache',
+    example: { reason: 'ENOSPC' },
   }),
 
   // ——— the build ———

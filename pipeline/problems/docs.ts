@@ -19,8 +19,9 @@ const AREAS: Record<string, string> = {
   note: 'Notes',
   caption: 'Captions',
   build: 'Building the site',
+  cache: 'The result cache',
   cli: 'The command line',
-  cast: 'The command line',
+  cast: 'The cast (in the plan or a --cast file)',
 };
 
 export const DOCS_FILE = 'docs/problems.md';

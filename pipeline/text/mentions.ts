@@ -43,6 +43,8 @@ interface Form {
 
 interface Entry {
   form: Form;
+  /** Index of the form in `Mentions.forms`. */
+  index: number;
   /** Member indices that may be meant: explicit owners, else derived owners. */
   members: number[];
   /** vocab type of each word, -1 when the text never has it. */
@@ -52,6 +54,11 @@ interface Entry {
 const collapse = (s: string): string => s.replace(/\s+/g, ' ');
 const ascii = (s: string): string => s.replace(/\u2019/g, "'");
 const stripPossessive = (s: string): string => s.replace(/['\u2019]s$/u, '');
+
+/** The key under which `findMentions` records a name or alias (see `Mentions.forms`), or null when it has no word. */
+export function formKey(s: string): string | null {
+  return makeForm(s)?.key ?? null;
+}
 
 function makeForm(s: string): Form | null {
   const spans = tokenise(s);
@@ -120,10 +127,12 @@ export function findMentions(model: TextModel, cast: CastMember[]): Mentions {
   // Candidates per vocabulary type of the first word, longest forms first.
   // A one-word form is also listed under its possessive ("ada's").
   const byType: Array<Entry[] | undefined> = new Array(vocab.length);
+  const forms: string[] = [];
   for (const o of buildOwners(cast).values()) {
     const form = o.form;
     const entry: Entry = {
       form,
+      index: forms.push(form.key) - 1,
       members: [...(o.explicit.size > 0 ? o.explicit : o.derived)].sort((x, y) => x - y),
       types: form.lower.map((w) => typeOf.get(w) ?? -1),
     };
@@ -161,7 +170,7 @@ export function findMentions(model: TextModel, cast: CastMember[]): Mentions {
     return HE_TITLES.has(w) || SHE_TITLES.has(w) ? w : null;
   };
 
-  const out = { token: u32Buffer(), length: u8Buffer(), member: u32Buffer() };
+  const out = { token: u32Buffer(), length: u8Buffer(), member: u32Buffer(), form: u32Buffer() };
   const ambiguous: AmbiguousMention[] = [];
   for (let i = 0; i < tokens.count; ) {
     const list = byType[tokens.type[i]];
@@ -181,6 +190,7 @@ export function findMentions(model: TextModel, cast: CastMember[]): Mentions {
       out.token.push(i);
       out.length.push(n);
       out.member.push(candidates[0]);
+      out.form.push(matched.index);
     } else if (candidates.length > 1) {
       ambiguous.push({
         token: i,
@@ -191,5 +201,13 @@ export function findMentions(model: TextModel, cast: CastMember[]): Mentions {
     }
     i += n;
   }
-  return { count: out.token.length, token: out.token.toArray(), length: out.length.toArray(), member: out.member.toArray(), ambiguous };
+  return {
+    count: out.token.length,
+    token: out.token.toArray(),
+    length: out.length.toArray(),
+    member: out.member.toArray(),
+    form: out.form.toArray(),
+    forms,
+    ambiguous,
+  };
 }

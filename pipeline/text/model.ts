@@ -184,6 +184,10 @@ export interface Mentions {
   length: Uint8Array;
   /** Index into the cast array. */
   member: Uint32Array;
+  /** Index into `forms` of the name or alias that matched. */
+  form: Uint32Array;
+  /** Every form looked for, as the key `formKey()` (text/mentions.ts) gives a name or alias. */
+  forms: string[];
   /** Mentions that could name more than one cast member; they are reported, not attributed. */
   ambiguous: AmbiguousMention[];
 }
