@@ -11,23 +11,25 @@
  * 2 the command line is wrong; 3 an unexpected internal failure.
  */
 import { parseArgs } from 'node:util';
-import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, rmSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { parse as parseYaml } from 'yaml';
-import { z } from 'zod';
 import { prepareExhibit, GENERATOR } from './exhibit.ts';
 import type { PrepareResult } from './exhibit.ts';
-import { formatProblem, hasErrors, problem, sortProblems } from './problems/problem.ts';
+import { formatProblem, hasErrors, problem, sortProblems, wording } from './problems/problem.ts';
 import type { Problem } from './problems/problem.ts';
 import { measures } from './measures/registry.ts';
 import { tableToCsv } from './stages/csv.ts';
 import { readText } from './stages/read-text.ts';
-import { castMemberSchema } from './plan/schema.ts';
-import type { CastMember } from './text/model.ts';
+import { basePathProblem } from './plan/schema.ts';
+import { readCastFile } from './plan/cast-file.ts';
+import { checkSettingsValue } from './plan/check-panels.ts';
+import { formatPath } from './plan/source.ts';
+import { coreKind, schemaAt } from './plan/schema-walk.ts';
 import { nearest } from './plan/suggest.ts';
 import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './stages/output.ts';
 import type { Protected } from './stages/output.ts';
+import { readingProblems, readingReport } from './stages/reading.ts';
 
 export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
 
@@ -60,9 +62,11 @@ Exit codes: 0 success, 1 problems in the exhibit files or a failed build, 2 wron
 
 class UsageError extends Error {}
 
-interface Io {
+export interface Io {
   out: (s: string) => void;
   err: (s: string) => void;
+  /** Also told every problem reported, as data (for tests and tools that run the command in-process). */
+  problems?: (problems: Problem[]) => void;
 }
 
 const defaultIo: Io = {
@@ -152,7 +156,9 @@ function cacheDir(values: Values): string | null {
 }
 
 function report(problems: Problem[], io: Io): void {
-  for (const p of sortProblems(problems)) io.err(formatProblem(p) + '\n');
+  const sorted = sortProblems(problems);
+  io.problems?.(sorted);
+  for (const p of sorted) io.err(formatProblem(p) + '\n');
 }
 
 function summaryLine(problems: Problem[]): string {
@@ -234,10 +240,8 @@ async function measure(rest: string[], values: Values, io: Io): Promise<number> 
   if (!values.panel) throw new UsageError('measure needs --panel ID (with a plan) or --text FILE --measure NAME (without one)');
   const plan = planArg(rest);
   const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), only: [values.panel] });
-  if (hasErrors(result.problems)) {
-    report(result.problems, io);
-    return EXIT.problems;
-  }
+  report(result.problems, io);
+  if (hasErrors(result.problems)) return EXIT.problems;
   const panel = result.prepared!.rooms.flatMap((r) => r.panels).find((p) => p.id === values.panel);
   if (!panel) {
     const all = (await prepareExhibit(plan, { cacheDir: cacheDir(values), only: [] })).prepared;
@@ -256,42 +260,73 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
   if (rest.length) throw new UsageError(`--text runs without a plan; remove "${rest.join(' ')}"`);
   const name = values.measure;
   if (!name) throw new UsageError('--text needs --measure NAME');
-  const m = measures[name];
+  const m = Object.hasOwn(measures, name) ? measures[name] : undefined;
   if (!m) {
     const near = nearest(name, Object.keys(measures));
     throw new UsageError(`unknown measure "${name}"${near ? ` — did you mean "${near}"?` : ` — the measures are: ${Object.keys(measures).join(', ')}`}`);
   }
-  const problems: Problem[] = [];
-  const cast = values.cast ? readCast(values.cast, problems) : [];
+  // The parameters, worded as the plan words a panel's params: nearest names, expected types, documented defaults.
   const raw: Record<string, unknown> = {};
   for (const p of values.param ?? []) {
     const eq = p.indexOf('=');
     if (eq < 1) throw new UsageError(`--param takes key=value, not "${p}"`);
-    raw[p.slice(0, eq)] = parseValue(p.slice(eq + 1));
+    const key = p.slice(0, eq);
+    const value = p.slice(eq + 1);
+    // A parameter that takes text keeps the value as written ("--param node=1848" looks for the word 1848).
+    raw[key] = coreKind(schemaAt(m.params, [key])) === 'string' ? value : parseValue(value);
   }
-  const parsed = m.params.safeParse(raw);
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      problems.push(problem('cli/param', { detail: issue.message }, { path: `--param ${issue.path.join('.') || '(params)'}` }));
-    }
-  }
-  if (m.needsCast && !values.cast) problems.push(problem('cli/needs-cast', { measure: name }));
-  const file = resolve(values.text!);
-  const read = readText(file, values.text!, { id: 'text' }, cast);
-  problems.push(...read.problems);
-  if (hasErrors(problems)) {
+  const checked = checkSettingsValue(m.params, raw, {
+    word: (key, hint) => wording('plan/unknown-param', { key, measure: name, hint }),
+    plural: `parameters of "${name}"`,
+  });
+  if (!('output' in checked)) {
+    const problems: Problem[] = checked.worded.map(({ path, wording: w }) => ({
+      severity: 'error',
+      code: w.code,
+      path: `--param ${formatPath(path) || '(parameters)'}`,
+      message: w.message,
+      ...(w.hint ? { hint: w.hint } : {}),
+    }));
     report(problems, io);
-    return EXIT.problems;
+    io.err(`Run "vitrine --help" for the commands and options; the method card of "${name}" lists its parameters.\n`);
+    return EXIT.usage;
   }
+  const params = checked.output;
+  const problems: Problem[] = [];
+  const castFile = values.cast ? await readCastFile(resolve(values.cast), values.cast) : undefined;
+  if (castFile) problems.push(...castFile.problems);
+  const cast = castFile?.cast ?? [];
+  if (m.needsCast && !values.cast) problems.push(problem('cli/needs-cast', { measure: name }));
   const language = values.language ?? 'en';
+  const read = readText(resolve(values.text!), values.text!, { id: 'text' }, cast);
+  problems.push(...read.problems);
+  if (read.text && !hasErrors(problems)) {
+    const { model, mentions } = read.text.open();
+    const reading = readingReport(model, mentions, cast);
+    problems.push(
+      ...readingProblems(reading, {
+        id: values.text!,
+        display: values.text!,
+        where: {},
+        trimmed: false,
+        pattern: false,
+        cast,
+        castPlaces: castFile?.places ?? [],
+        language,
+      }),
+    );
+  }
+  report(problems, io);
+  if (hasErrors(problems)) return EXIT.problems;
+  const { model, mentions } = read.text!.open();
   let result: unknown;
   try {
-    result = m.compute({ ...read.text!.open(), cast, language }, parsed.data);
+    result = m.compute({ model, mentions, cast, language }, params);
   } catch (e) {
     io.err(`${values.text}: the measure "${name}" cannot run with these parameters: ${(e as Error).message}\n`);
     return EXIT.problems;
   }
-  io.out(format === 'csv' ? tableToCsv(m.table(result, parsed.data)) : JSON.stringify(result, null, 2) + '\n');
+  io.out(format === 'csv' ? tableToCsv(m.table(result, params)) : JSON.stringify(result, null, 2) + '\n');
   return EXIT.ok;
 }
 
@@ -316,32 +351,14 @@ function parseValue(v: string): unknown {
   return v;
 }
 
-function readCast(file: string, problems: Problem[]): CastMember[] {
-  let data: unknown;
-  try {
-    data = parseYaml(readFileSync(file, 'utf8'));
-  } catch (e) {
-    problems.push(problem('cast/unreadable', { reason: (e as Error).message }, { file }));
-    return [];
-  }
-  const parsed = z.array(castMemberSchema).safeParse(data);
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      problems.push(problem('cast/invalid', { detail: issue.message }, { file, path: formatPath(issue.path) }));
-    }
-    return [];
-  }
-  return parsed.data.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, ...(c.pronoun ? { pronoun: c.pronoun } : {}) }));
-}
-
-function formatPath(path: PropertyKey[]): string {
-  return path.map((p, i) => (typeof p === 'number' ? `[${p}]` : `${i ? '.' : ''}${String(p)}`)).join('');
-}
-
 // ——— build ———
 
 async function build(rest: string[], values: Values, io: Io): Promise<number> {
   const plan = planArg(rest);
+  if (values.base !== undefined) {
+    const wrong = basePathProblem(values.base);
+    if (wrong) throw new UsageError(`--base: ${wrong.message} — ${wrong.hint}`);
+  }
   const out = resolve(values.out ?? 'dist');
   const quiet = !!values.quiet;
   const log = quiet ? undefined : (m: string) => io.out(m + '\n');

@@ -545,13 +545,6 @@ export const catalogue = {
   }),
 
   // ——— the command line ———
-  'cli/param': entry<{ detail: string }>({
-    title: 'A --param the measure cannot use',
-    severity: 'error',
-    message: (a) => a.detail,
-    hint: () => undefined,
-    example: { detail: 'Too small: expected number to be >=1' },
-  }),
   'cli/needs-cast': entry<{ measure: string }>({
     title: 'A measure run without its cast',
     severity: 'error',
@@ -572,13 +565,6 @@ export const catalogue = {
     message: () => 'the cast file does not hold a list',
     hint: () => 'a cast file is a YAML list of entries, each "- { id: …, name: …, aliases: [ … ], pronoun: … }"',
     example: {},
-  }),
-  'cast/invalid': entry<{ detail: string }>({
-    title: 'A cast file entry that is not valid',
-    severity: 'error',
-    message: (a) => a.detail,
-    hint: () => 'the cast file is a YAML list of { id, name, aliases, pronoun }',
-    example: { detail: 'Invalid input: expected string, received number' },
   }),
 } as const;
 
