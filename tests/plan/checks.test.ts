@@ -277,7 +277,9 @@ describe('plan-level checks', () => {
     const unknown = r.problems.find((p) => p.code === 'plan/unknown-key')!;
     // Line 13 is "        titel: Lengths": key at col 9.
     expect(where(unknown)).toEqual([13, 9, 'rooms[0].panels[0].titel', 'plan/unknown-key']);
-    expect(unknown.hint).toBe('did you mean "title"?');
+    expect(unknown.hint).toBe('did you mean "title"? ("title" is required)');
+    // One fault, one message: the misspelt key is not also reported as "title" missing.
+    expect(r.problems).toEqual([unknown]);
   });
 
   it('asks for quotes when a number stands where text is expected', async () => {
