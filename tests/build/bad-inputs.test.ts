@@ -121,7 +121,7 @@ export const rows: BadInput[] = [
     name: 'a text saved as UTF-16 without a byte order mark is decoded, with a warning',
     setup: (ex) => writeFileSync(ex.text, Buffer.from(readFileSync(ex.text, 'utf8'), 'utf16le')),
     status: 0,
-    codes: ['text/utf16-no-bom'],
+    codes: ['file/utf16-no-bom'],
     says: [new RegExp(`${TEXT} texts\\[0\\]: warning: ${TEXT} has no byte order mark, but the pattern of its zero bytes shows it is UTF-16 \\(little-endian\\)`)],
     // Read as the UTF-8 original is: the same words and chapters.
     after: (_ex, run) => expect(reading(run.stdout)).toEqual(reading(baseline.stdout)),
@@ -159,7 +159,7 @@ export const rows: BadInput[] = [
     name: 'a Latin-1 word list is an error at the first bad byte',
     setup: (ex) => writeFileSync(ex.lexicon, Buffer.concat([readFileSync(ex.lexicon), Buffer.from('café\tcomfort\n', 'latin1')])),
     status: 1,
-    codes: ['lexicon/not-utf8'],
+    codes: ['file/not-utf8'],
     says: [
       (ex) => {
         const line = readFileSync(ex.lexicon, 'latin1').split('\n').length - 1;
@@ -266,7 +266,7 @@ export const rows: BadInput[] = [
     name: 'bad ad-hoc --param values get the plan’s hints: nearest name, expected type, documented default',
     args: () => ['measure', '--text', TEXT, '--measure', 'concordance', '--param', 'nod=lamp', '--param', 'width=wide'],
     status: 2,
-    codes: ['cli/unknown-param', 'cli/wrong-type'],
+    codes: ['plan/unknown-param', 'plan/wrong-type'],
     says: [
       /^--param nod: unknown parameter "nod" for measure "concordance" — did you mean "node"\? \("node" is required\)$/m,
       /^--param width: expected a number, found the text "wide" — Words of context on each side of the node.* Default: 8\.$/m,
