@@ -15,7 +15,7 @@ import { cpSync, existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, 
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { main } from '../../pipeline/cli.ts';
-import type { Problem } from '../../pipeline/problems.ts';
+import type { Problem } from '../../pipeline/problems/problem.ts';
 import { ROOT, positionOf, replaceIn, treeHashes } from './helpers.ts';
 
 /** A copy of the demo exhibit to break: `root` is the working directory, `content/` the exhibit folder. */
