@@ -5,8 +5,9 @@
  *   2. texts     read each text (UTF-8 check); models are built lazily, only on a cache miss
  *   3. measures  compute each panel's measure, or take it from the cache (key: text hash,
  *                reading options, measure name + version + params, cast, language)
- *   4. notes     resolve each curator note against the panel's chart data
- *   5. charts    draw each panel as SVG, with alt text and data table
+ *   4. notes     make each curator note exact against the text (pipeline/stages/notes.ts)
+ *   5. charts    draw each panel as SVG in both layouts, with alt text and data table; the
+ *                chart kind places each note once, and what it cannot draw is reported
  *   6. assemble  the PreparedExhibit the site renders (pipeline/stages/prepared.ts)
  *
  * Nothing here writes outside the cache folder; the site build is Astro's job.
@@ -26,13 +27,13 @@ import { readLexicons } from './stages/read-lexicons.ts';
 import { checkPins } from './dialogue/pins.ts';
 import { findQuotes } from './dialogue/quotes.ts';
 import { charts } from './charts/index.ts';
-import type { ChartData, PinnedNote } from './charts/types.ts';
+import { drawPanel } from './stages/notes.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
 import type { CacheCheck } from './cache/cache.ts';
 import { readText } from './stages/read-text.ts';
 import type { ReadText } from './stages/read-text.ts';
 import type { CastMember, HeadingReport, TextOptions, TrimmedLines } from './text/model.ts';
-import type { PreparedExhibit, PreparedMethod, PreparedNote, PreparedPanel, PreparedRoom, PreparedText } from './stages/prepared.ts';
+import type { PreparedExhibit, PreparedMethod, PreparedPanel, PreparedRoom, PreparedText } from './stages/prepared.ts';
 import type { StructureResult } from './measures/structure.ts';
 import { planJobs } from './stages/jobs.ts';
 import type { ExhibitJobs, PanelJob, TextJob, Where } from './stages/jobs.ts';
@@ -338,8 +339,9 @@ function preparePanel(
       chart: job.chart,
       options: job.options,
       svg: shown.out.svg,
-      svgNarrow: shown.out.svgNarrow ?? null,
+      svgNarrow: shown.out.svgNarrow,
       alt: job.alt ?? shown.out.alt,
+      summary: job.alt ?? shown.out.summary,
       table: shown.table,
       notes: shown.notes,
       caption: job.caption,
@@ -354,176 +356,16 @@ function presentPanel(job: PanelJob, result: unknown, state: TextState, cast: Ca
   const m = measures[job.measure]!;
   const problems: Problem[] = [];
   const data = m.views[job.chart]!(result, job.params);
-  const notes: PinnedNote[] = [];
-  const prepNotes: PreparedNote[] = [];
-  job.notes.forEach((n, i) => {
-    const label = String(i + 1);
-    const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
-    const resolved = resolveNote(n.at, data, state.structure, cast, segments);
-    if ('problem' in resolved) {
-      problems.push(atWhere(n.where, 'note/unresolved', { detail: resolved.problem, hint: resolved.hint }));
-      return;
-    }
-    notes.push({ label, text: n.text, at: resolved.at });
-    prepNotes.push({ label, text: n.text, target: resolved.target });
+  // 4–5. notes and chart: the notes made exact against the text, placed by the chart kind, what it cannot draw reported.
+  const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
+  const { out, notes, problems: noteProblems } = drawPanel(charts[job.chart]!, data, job.options, job.notes, {
+    chapters: state.structure.chapters,
+    parts: state.structure.parts,
+    cast,
+    segments,
   });
-  const chart = charts[job.chart]!;
-  const byLabel = new Map(job.notes.map((n, i) => [String(i + 1), n]));
-  const out = (chart.render as (d: ChartData, o: unknown, t?: unknown, n?: readonly PinnedNote[]) => ReturnType<typeof chart.render>)(
-    data,
-    job.options,
-    undefined,
-    notes,
-  );
-  for (const label of out.skippedNotes ?? []) {
-    const n = byLabel.get(label);
-    if (n) problems.push(atWhere(n.where, 'note/not-drawn', {}));
-  }
-  return { out, table: m.table(result, job.params), notes: prepNotes, problems };
-}
-
-type NoteAt = { part?: number; chapter?: number; character?: string; word?: string; segment?: number };
-
-/** Places a curator's note on the chart's data, or says why it cannot be placed. */
-export function resolveNote(
-  at: NoteAt,
-  data: ChartData,
-  structure: StructureResult,
-  cast: CastMember[],
-  /** How many equal segments the measure counted by, if it did. */
-  segments?: number,
-): { at: PinnedNote['at']; target: string } | { problem: string; hint: string } {
-  if (at.chapter !== undefined && at.part !== undefined) {
-    // { part: 2, chapter: 3 }: the third chapter of the second part, found by its running number.
-    const part = structure.parts?.[at.part - 1];
-    if (!part) {
-      const n = structure.parts?.length ?? 0;
-      return {
-        problem: `the note points at part ${at.part}, but the text has ${n === 0 ? 'no parts' : `${n} part${n === 1 ? '' : 's'}`}`,
-        hint: n === 0 ? 'point it at a chapter by its number through the text: { chapter: N }' : `use a part from 1 to ${n}`,
-      };
-    }
-    if (at.chapter > part.chapters) {
-      return { problem: `the note points at chapter ${at.chapter} of ${part.title}, which has ${part.chapters} chapter${part.chapters === 1 ? '' : 's'}`, hint: `use a chapter from 1 to ${part.chapters}` };
-    }
-    const running = part.firstChapter + at.chapter - 1;
-    return placeChapter(running, structure.chapters[running - 1]!.title, data);
-  }
-  if (at.chapter !== undefined) {
-    const ch = structure.chapters[at.chapter - 1];
-    if (!ch) return { problem: `the note points at chapter ${at.chapter}, but the text has ${structure.chapters.length} chapters`, hint: `use a chapter from 1 to ${structure.chapters.length}` };
-    return placeChapter(at.chapter, ch.title, data);
-  }
-  if (at.character !== undefined) {
-    const member = cast.find((c) => c.id === at.character);
-    if (!member) return { problem: `the note points at the character "${at.character}", who is not in the cast`, hint: 'use a cast id' };
-    const placed = placeNamed([member.id, member.name], data);
-    if (placed) return { at: placed, target: member.name };
-    return { problem: `the note points at ${member.name}, who is not shown in this chart`, hint: 'point it at a character the chart shows, or at a chapter' };
-  }
-  if (at.word !== undefined) {
-    const w = at.word.toLowerCase();
-    const placed = placeNamed([w, at.word], data) ?? placeInText(w, data);
-    if (placed) return { at: placed, target: `“${at.word}”` };
-    return { problem: `the note points at the word "${at.word}", which this chart does not show`, hint: 'point it at a word the chart shows' };
-  }
-  const seg = at.segment!;
-  if (data.kind === 'lines' && seg <= data.points.length) return { at: { x: seg - 1 }, target: data.points[seg - 1]! };
-  if (data.kind === 'strip' && segments && seg <= segments) {
-    return { at: { x: (seg - 0.5) / segments }, target: `Segment ${seg} of ${segments}` };
-  }
-  return { problem: `the note points at segment ${seg}, which this chart does not show`, hint: 'segments exist only on charts of a measure counted by segment' };
-}
-
-/** A chapter on a chart: its bar, its point, its boundary, or the small multiple drawn for it. */
-function placeChapter(n: number, title: string, data: ChartData): { at: PinnedNote['at']; target: string } {
-  switch (data.kind) {
-    case 'bars':
-      if (data.categories.includes(title)) return { at: { category: title }, target: title };
-      break;
-    case 'lines':
-      if (data.points[n - 1] === title) return { at: { x: n - 1 }, target: title };
-      break;
-    case 'strip':
-      return { at: { x: data.boundaries[n - 1]?.at ?? 0 }, target: title };
-    case 'multiples': {
-      const panel = data.panels.find((p) => p.title === title);
-      if (panel) return { at: { category: panel.id }, target: title };
-      break;
-    }
-    case 'matrix': {
-      const row = [...data.rows, ...data.columns].find((r) => r.name === title);
-      if (row) return { at: { category: row.name }, target: title };
-      break;
-    }
-  }
-  // The chart has no place for chapters: the note is shown beside it.
-  return { at: {}, target: title };
-}
-
-/** Something named (a character or a word) on a chart that draws named things. */
-function placeNamed(names: string[], data: ChartData): PinnedNote['at'] | null {
-  const has = (x: string | undefined) => x !== undefined && names.includes(x);
-  switch (data.kind) {
-    case 'bars': {
-      const c = data.categories.find((x) => has(x) || has(x.toLowerCase()));
-      return c !== undefined ? { category: c } : null;
-    }
-    case 'lines': {
-      const s = data.series.find((x) => has(x.id) || has(x.name));
-      return s ? { series: s.id } : null;
-    }
-    case 'strip': {
-      const r = data.rows.find((x) => has(x.id) || has(x.name));
-      return r ? { category: r.id } : null;
-    }
-    case 'matrix': {
-      const r = [...data.rows, ...data.columns].find((x) => has(x.id) || has(x.name));
-      return r ? { category: r.name } : null;
-    }
-    case 'network': {
-      const nd = data.nodes.find((x) => has(x.id) || has(x.name));
-      return nd ? { category: nd.id } : null;
-    }
-    case 'scatter': {
-      const pt = data.points.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()));
-      return pt ? { category: pt.id } : null;
-    }
-    case 'treemap': {
-      const it = data.items.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()));
-      return it ? { category: it.id } : null;
-    }
-    case 'multiples': {
-      // A panel drawn for the thing itself, else the first panel that shows it.
-      const own = data.panels.find((p) => has(p.id) || has(p.title));
-      if (own) return { category: own.id };
-      const showing = data.panels.find((p) =>
-        p.data.kind === 'bars' ? p.data.categories.some((c) => has(c) || has(c.toLowerCase())) : p.data.series.some((x) => has(x.id) || has(x.name)),
-      );
-      return showing ? { category: showing.id } : null;
-    }
-    default:
-      return null;
-  }
-}
-
-/** A word in running text or concordance lines: the first line or span that holds it. */
-function placeInText(word: string, data: ChartData): PinnedNote['at'] | null {
-  const holds = (s: string) => new RegExp(`(^|[^\\p{L}])${word.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}($|[^\\p{L}])`, 'iu').test(s);
-  if (data.kind === 'kwic') {
-    const i = data.lines.findIndex((l) => holds(`${l.left} ${l.keyword} ${l.right}`));
-    return i >= 0 ? { x: i } : null;
-  }
-  if (data.kind === 'textmap') {
-    const i = data.spans.findIndex((sp) => holds(sp.text));
-    return i >= 0 ? { x: i } : null;
-  }
-  if (data.kind === 'tree') {
-    const walk = (n: { word: string; children: { word: string; children: unknown[] }[] }): boolean =>
-      n.word.toLowerCase() === word || n.children.some((c) => walk(c as never));
-    return walk(data.root) ? { category: word } : null;
-  }
-  return null;
+  problems.push(...noteProblems);
+  return { out, table: m.table(result, job.params), notes, problems };
 }
 
 function atWhere<C extends ProblemCode>(where: Where, code: C, args: ProblemArgs<C>): Problem {

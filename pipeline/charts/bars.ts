@@ -4,7 +4,7 @@
  */
 
 import { z } from 'zod';
-import type { BarsData, NoteAt, Table } from './types.ts';
+import type { BarsData, DataAt, NoteAt, Table, TextAt } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
@@ -15,7 +15,7 @@ import { tickFormatter, valueAxis } from './scale.ts';
 import type { ValueAxis } from './scale.ts';
 import { legend } from './legend.ts';
 import { thinEvenly } from './place.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const barsOptions = z.strictObject({
@@ -165,7 +165,17 @@ interface Target {
   category: string;
 }
 
-function place(at: NoteAt, data: BarsData, prep: Prepared): Target | Miss {
+/** A chapter is its bar when the bars are the chapters; a character or word, the bar named after it. */
+function inData(at: TextAt, data: BarsData): DataAt | Miss {
+  if ('chapter' in at) return data.categories.includes(at.title) ? { category: at.title } : 'absent';
+  const has = namedAs(at);
+  const c = has ? data.categories.find((x) => has(x) || has(x.toLowerCase())) : undefined;
+  return c !== undefined ? { category: c } : 'absent';
+}
+
+function place(note: NoteAt, data: BarsData, prep: Prepared): Target | Miss {
+  const at = isDataAt(note) ? note : inData(note, data);
+  if (typeof at === 'string') return at;
   const c = at.category;
   if (c === undefined || !data.categories.includes(c)) return 'absent';
   return prep.shown.some((i) => data.categories[i] === c) ? { category: c } : 'beside';

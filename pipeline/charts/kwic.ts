@@ -16,7 +16,7 @@ import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts
 import { formatNumber, joinWords, sentence } from './format.ts';
 import { boldWidth, clipEnd, clipStart, collapseSpace } from './clip.ts';
 import { mixColour } from './colour.ts';
-import { markerWidth, noteInline } from './notes.ts';
+import { holdsWord, isDataAt, markerWidth, noteInline } from './notes.ts';
 
 export const kwicOptions = z.strictObject({
   limit: z
@@ -131,13 +131,13 @@ function kwicAlt(data: KwicData, lines: Line[], shown: number): string {
 
 /* ---------- notes ---------- */
 
-/** A note points at a line by its index in the data (at.x); it is drawn when the line is. */
+/** A note points at a line by its index in the data (at.x), or a word at the first line that holds it; it is drawn when the line is. */
 interface Target {
   line: number;
 }
 
 function place(at: NoteAt, lines: readonly Line[], shown: readonly Line[]): Target | Miss {
-  const x = at.x;
+  const x = isDataAt(at) ? at.x : 'word' in at ? lines.findIndex((l) => holdsWord(`${l.left} ${l.keyword} ${l.right}`, at.word)) : undefined;
   if (x === undefined || !Number.isInteger(x) || x < 0 || x >= lines.length) return 'absent';
   return shown.some((l) => l.index === x) ? { line: x } : 'beside';
 }

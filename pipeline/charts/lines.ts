@@ -6,7 +6,7 @@
  */
 
 import { z } from 'zod';
-import type { LinesData, NoteAt, Table } from './types.ts';
+import type { DataAt, LinesData, NoteAt, Table, TextAt } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
@@ -15,7 +15,7 @@ import { el, num, polylinePath, textEl, textWidth, titleEl, truncateText } from 
 import { decimalsFor, formatValue, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { spreadApart, thinEvenly } from './place.ts';
-import { markerHeight, notesInLane } from './notes.ts';
+import { isDataAt, markerHeight, namedAs, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const linesOptions = z.strictObject({
@@ -145,7 +145,18 @@ interface Target {
   s: number | null;
 }
 
-function place(at: NoteAt, data: LinesData, values: Values): Target | Miss {
+/** A chapter is its position when the positions are the chapters; a segment, its position; a character or word, the series named after it. */
+function inData(at: TextAt, data: LinesData): DataAt | Miss {
+  if ('chapter' in at) return data.points[at.chapter - 1] === at.title ? { x: at.chapter - 1 } : 'absent';
+  if ('segment' in at) return at.segment <= data.points.length ? { x: at.segment - 1 } : 'absent';
+  const has = namedAs(at)!;
+  const s = data.series.find((x) => has(x.id) || has(x.name));
+  return s ? { series: s.id } : 'absent';
+}
+
+function place(note: NoteAt, data: LinesData, values: Values): Target | Miss {
+  const at = isDataAt(note) ? note : inData(note, data);
+  if (typeof at === 'string') return at;
   const s = at.series === undefined ? null : data.series.findIndex((x) => x.id === at.series);
   if (s === -1) return 'absent';
   let x = at.x;
@@ -417,6 +428,8 @@ export const lines = defineChart({
   empty: ({ data, prep }) => emptyReason(data, prep.values),
   table: ({ data, prep }) => linesTable(data, prep.values, prep.bands),
   place: (at, { data, prep }) => place(at, data, prep.values),
+  // A segment is named by its position's own label ("Segment 3 (words 1201–1800)").
+  words: (at, { data }) => ('segment' in at ? data.points[at.segment - 1] : undefined),
   alt: ({ data, prep }) => linesAlt(data, prep.values, prep.fmt),
   draw: ({ data, prep, opts, theme }, notes, { width, narrow }) =>
     drawLines({ data, values: prep.values, bands: prep.bands, opts, theme, notes, fmt: prep.fmt, width, narrow }),

@@ -19,7 +19,7 @@
  */
 
 import { z } from 'zod';
-import type { MatrixData, NoteAt, Table } from './types.ts';
+import type { DataAt, MatrixData, NoteAt, Table, TextAt } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
@@ -32,7 +32,7 @@ import { lightnessRamp, pickSteps, textOn } from './ramp.ts';
 import { seriate } from './seriate.ts';
 import { thinEvenly } from './place.ts';
 import { notesBelow } from './lanebelow.ts';
-import { markerHeight, markerWidth, noteInline } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline } from './notes.ts';
 
 export const matrixOptions = z.strictObject({
   order: z
@@ -206,8 +206,22 @@ interface Target {
   index: number;
 }
 
+/** A chapter, character or word is the row (or failing that the column) named after it. */
+function inData(at: TextAt, data: MatrixData): DataAt | Miss {
+  const items = [...data.rows, ...data.columns];
+  if ('chapter' in at) {
+    const row = items.find((r) => r.name === at.title);
+    return row ? { category: row.name } : 'absent';
+  }
+  const has = namedAs(at);
+  const r = has ? items.find((x) => has(x.id) || has(x.name)) : undefined;
+  return r ? { category: r.name } : 'absent';
+}
+
 function place(note: NoteAt, data: MatrixData): Target | Miss {
-  const at = note.category;
+  const d = isDataAt(note) ? note : inData(note, data);
+  if (typeof d === 'string') return d;
+  const at = d.category;
   if (at === undefined) return 'absent';
   const find = (items: { id: string; name: string }[]) => {
     const byId = items.findIndex((x) => x.id === at);

@@ -7,7 +7,7 @@
  */
 
 import { z } from 'zod';
-import type { BarsData, LinesData, MultiplesData, NoteAt, Table } from './types.ts';
+import type { BarsData, DataAt, LinesData, MultiplesData, NoteAt, Table, TextAt } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
@@ -18,7 +18,7 @@ import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import type { ValueFormat } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { legend } from './legend.ts';
-import { markerWidth, noteInline } from './notes.ts';
+import { isDataAt, markerWidth, namedAs, noteInline } from './notes.ts';
 
 export const multiplesOptions = z.strictObject({
   columns: z
@@ -170,7 +170,25 @@ interface Target {
   panel: string;
 }
 
-function place(at: NoteAt, panels: readonly Panel[]): Target | Miss {
+/** A chapter is the panel drawn for it; a character or word, the panel drawn for it, else the first panel that shows it. */
+function inData(at: TextAt, data: MultiplesData): DataAt | Miss {
+  if ('chapter' in at) {
+    const panel = data.panels.find((p) => p.title === at.title);
+    return panel ? { category: panel.id } : 'absent';
+  }
+  const has = namedAs(at);
+  if (!has) return 'absent';
+  const own = data.panels.find((p) => has(p.id) || has(p.title));
+  if (own) return { category: own.id };
+  const showing = data.panels.find((p) =>
+    p.data.kind === 'bars' ? p.data.categories.some((c) => has(c) || has(c.toLowerCase())) : p.data.series.some((x) => has(x.id) || has(x.name)),
+  );
+  return showing ? { category: showing.id } : 'absent';
+}
+
+function place(note: NoteAt, data: MultiplesData, panels: readonly Panel[]): Target | Miss {
+  const at = isDataAt(note) ? note : inData(note, data);
+  if (typeof at === 'string') return at;
   const id = at.category;
   return id !== undefined && panels.some((p) => p.id === id) ? { panel: id } : 'absent';
 }
@@ -474,7 +492,7 @@ export const multiples = defineChart({
   },
   empty: ({ prep }) => emptyReason(prep.panels),
   table: ({ prep }) => multiplesTable(prep.panels),
-  place: (at, { prep }) => place(at, prep.panels),
+  place: (at, { data, prep }) => place(at, data, prep.panels),
   // One marker per panel: the first note on it.
   slot: (t) => t.panel,
   alt: ({ prep }) => multiplesAlt(prep.panels, prep.fmt),

@@ -34,7 +34,7 @@ import { placeAll, placeLabel } from './pointlabels.ts';
 import type { Disc, PlaceContext, Rect, Segment } from './pointlabels.ts';
 import { reach, shapeFor, symbol } from './shapes.ts';
 import type { Shape } from './shapes.ts';
-import { markerHeight, markerWidth, noteInline } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline } from './notes.ts';
 
 export const networkOptions = z.strictObject({
   minWeight: z
@@ -194,9 +194,14 @@ function networkAlt(data: NetworkData, prep: Prepared): string {
 
 /* ---------- notes ---------- */
 
-/** A note goes beside a node, found by id, then by name. */
-function place(note: NoteAt, prep: Prepared): { node: Node } | Miss {
-  const at = note.category;
+/** A note goes beside a node: by id, then by name; a character or word, the node named after it. Chapters have no place here. */
+function place(note: NoteAt, data: NetworkData, prep: Prepared): { node: Node } | Miss {
+  let at: string | undefined;
+  if (isDataAt(note)) at = note.category;
+  else {
+    const has = namedAs(note);
+    at = has ? data.nodes.find((x) => has(x.id) || has(x.name))?.id : undefined;
+  }
   if (at === undefined) return 'absent';
   const node = prep.nodes.find((n) => n.id === at) ?? prep.nodes.find((n) => n.name === at);
   return node ? { node } : 'absent';
@@ -427,7 +432,7 @@ export const network = defineChart({
   prepare: (data: NetworkData) => prepare(data),
   empty: ({ prep }) => (prep.nodes.length === 0 ? 'the dataset has no nodes.' : null),
   table: ({ data, prep }) => networkTable(data, prep),
-  place: (at, { prep }) => place(at, prep),
+  place: (at, { data, prep }) => place(at, data, prep),
   alt: ({ data, prep }) => networkAlt(data, prep),
   draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => drawNetwork({ data, prep, opts, theme, notes, width, narrow }),
 });

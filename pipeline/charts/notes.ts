@@ -6,12 +6,37 @@
  * marker's `<title>`.
  */
 
-import type { PinnedNote } from './types.ts';
+import type { DataAt, NoteAt, PinnedNote, TextAt } from './types.ts';
 import type { Theme } from './theme.ts';
 import { el, num, textEl, textWidth, titleEl } from './svg.ts';
 import { serifStyle } from './theme.ts';
 import { sentence } from './format.ts';
 import { spreadApart } from './place.ts';
+
+/* ---------- reading a note's target ---------- */
+
+/** Whether a target is in the dataset's own terms (rather than a chapter, character, word or segment). */
+export function isDataAt(at: NoteAt): at is DataAt {
+  return !('chapter' in at || 'character' in at || 'word' in at || 'segment' in at);
+}
+
+/**
+ * Whether a string is one of the names a target goes by, for kinds that find
+ * things by name: a character's cast id and name; a word in lower case and as
+ * typed. Null for chapters and segments, which are not found by name.
+ */
+export function namedAs(at: TextAt): ((s: string | undefined) => boolean) | null {
+  const names = 'character' in at ? [at.character, at.name] : 'word' in at ? [at.word.toLowerCase(), at.word] : null;
+  return names && ((s) => s !== undefined && names.includes(s));
+}
+
+/** Whether `text` holds `word` (a word or phrase) as a whole word, ignoring case. */
+export function holdsWord(text: string, word: string): boolean {
+  const w = word.toLowerCase().replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+  return new RegExp(`(^|[^\\p{L}])${w}($|[^\\p{L}])`, 'iu').test(text);
+}
+
+/* ---------- markers ---------- */
 
 /** Height of a marker; also the height of the lane that holds markers above a plot. */
 export function markerHeight(theme: Theme): number {

@@ -18,7 +18,7 @@ import { thinEvenly } from './place.ts';
 import { placeLabels } from './labels2d.ts';
 import { clipEnd } from './clip.ts';
 import type { Box, Disc, LabelRequest } from './labels2d.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const scatterOptions = z.strictObject({
@@ -124,11 +124,22 @@ function scatterAlt(data: ScatterData, prep: Prepared, fx: (v: number) => string
 
 /* ---------- notes ---------- */
 
-/** A note points at a point by its id, or failing that its label. */
-function place(at: NoteAt, prep: Prepared): { point: Point } | Miss {
-  const c = at.category;
-  const point = c === undefined ? undefined : (prep.points.find((p) => p.id === c) ?? prep.points.find((p) => p.label === c));
-  return point ? { point } : 'absent';
+/**
+ * A note points at a point by its id, or failing that its label; a character
+ * or word, at the point named after it. A point without both values is not
+ * drawn: its note goes beside the chart. Chapters have no place here.
+ */
+function place(note: NoteAt, data: ScatterData, prep: Prepared): { point: Point } | Miss {
+  let c: string | undefined;
+  if (isDataAt(note)) c = note.category;
+  else {
+    const has = namedAs(note);
+    c = has ? data.points.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()))?.id : undefined;
+  }
+  if (c === undefined) return 'absent';
+  const point = prep.points.find((p) => p.id === c) ?? prep.points.find((p) => p.label === c);
+  if (point) return { point };
+  return data.points.some((p) => p.id === c || p.label === c) ? 'beside' : 'absent';
 }
 
 /* ---------- which points to name ---------- */
@@ -417,7 +428,7 @@ export const scatter = defineChart({
   prepare: (data: ScatterData) => prepare(data),
   empty: ({ data, prep }) => (prep.points.length > 0 ? null : data.points.length === 0 ? 'the dataset has no points.' : 'no point has both of its values.'),
   table: ({ data, prep }) => scatterTable(data, prep),
-  place: (at, { prep }) => place(at, prep),
+  place: (at, { data, prep }) => place(at, data, prep),
   alt: ({ data, prep }) => scatterAlt(data, prep, prep.fx, prep.fy),
   draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => {
     const ctx: Ctx = { data, prep, opts, theme, notes, fx: prep.fx, fy: prep.fy, width, narrow };

@@ -4,7 +4,7 @@
  */
 
 import { z } from 'zod';
-import type { NoteAt, StripData, Table } from './types.ts';
+import type { DataAt, NoteAt, StripData, Table, TextAt } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
@@ -12,7 +12,7 @@ import { defineChart, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { thinEvenly, thinGreedy } from './place.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
 export const stripOptions = z.strictObject({
@@ -114,7 +114,18 @@ interface Target {
   x: number | null;
 }
 
-function place(at: NoteAt, rows: Row[]): Target | Miss {
+/** A chapter is its boundary; a segment, its middle (when the measure counted by segments); a character or word, its row. */
+function inData(at: TextAt, data: StripData): DataAt | Miss {
+  if ('chapter' in at) return { x: data.boundaries[at.chapter - 1]?.at ?? 0 };
+  if ('segment' in at) return at.of && at.segment <= at.of ? { x: (at.segment - 0.5) / at.of } : 'absent';
+  const has = namedAs(at)!;
+  const r = data.rows.find((x) => has(x.id) || has(x.name));
+  return r ? { category: r.id } : 'absent';
+}
+
+function place(note: NoteAt, data: StripData, rows: Row[]): Target | Miss {
+  const at = isDataAt(note) ? note : inData(note, data);
+  if (typeof at === 'string') return at;
   let row: number | null = null;
   if (at.category !== undefined) {
     row = rows.findIndex((r) => r.id === at.category);
@@ -276,7 +287,7 @@ export const strip = defineChart({
   prepare: (data: StripData) => clean(data),
   empty: ({ prep }) => emptyReason(prep),
   table: ({ data, prep }) => stripTable(data, prep),
-  place: (at, { prep }) => place(at, prep),
+  place: (at, { data, prep }) => place(at, data, prep),
   alt: ({ prep }) => stripAlt(prep),
   draw: ({ data, prep, opts, theme }, targets, { width, narrow }) => drawStrip({ data, rows: prep, opts, theme, targets, width, narrow }),
 });

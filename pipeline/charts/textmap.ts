@@ -19,7 +19,7 @@ import { valueScale } from './diverging.ts';
 import type { ValueScale } from './diverging.ts';
 import { flowLines } from './flow.ts';
 import type { FlowItem } from './flow.ts';
-import { markerHeight, markerWidth, noteInline } from './notes.ts';
+import { holdsWord, isDataAt, markerHeight, markerWidth, noteInline } from './notes.ts';
 
 export const textmapOptions = z.strictObject({
   encode: z
@@ -189,8 +189,9 @@ function textmapAlt(data: TextmapData, spans: Span[], p: Pieces, scale: ValueSca
 
 /* ---------- notes ---------- */
 
+/** A note points at a span by its index (at.x), or a word at the first span that holds it. */
 function place(at: NoteAt, spans: readonly Span[], spansSet: number): Target | Miss {
-  const x = at.x;
+  const x = isDataAt(at) ? at.x : 'word' in at ? spans.findIndex((s) => holdsWord(s.text, at.word)) : undefined;
   if (x === undefined || !Number.isInteger(x) || x < 0 || x >= spans.length) return 'absent';
   return x < spansSet ? { span: x } : 'beside';
 }

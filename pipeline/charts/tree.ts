@@ -24,7 +24,7 @@
 import { z } from 'zod';
 import { hierarchy, tree as tidyTree } from 'd3-hierarchy';
 import type { HierarchyPointNode } from 'd3-hierarchy';
-import type { Table, TreeData, TreeNode } from './types.ts';
+import type { NoteAt, Table, TreeData, TreeNode } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss } from './chart.ts';
@@ -135,6 +135,11 @@ const quote = (s: string) => `\u201C${s}\u201D`;
 
 function times(n: number): string {
   return n === 1 ? 'once' : n === 2 ? 'twice' : `${formatNumber(n, 0)} times`;
+}
+
+/** Whether the tree holds `word` (lower case) anywhere. */
+function holds(n: TreeNode, word: string): boolean {
+  return n.word.toLowerCase() === word || (n.children ?? []).some((c) => holds(c, word));
 }
 
 /* ---------- table and alt text ---------- */
@@ -358,8 +363,11 @@ export const tree = defineChart({
       : `nothing ${data.direction === 'right' ? 'follows' : 'precedes'} ${quote(root.word)} in the text.`;
   },
   table: ({ data, prep }) => treeTable(data, prep.root),
-  // The tree has no marks for notes: every note goes beside it.
-  place: (): Miss => 'beside',
+  // The tree has no marks for notes: a note goes beside it, unless it names a word the tree does not hold, or a character or segment.
+  place: (at: NoteAt, { data }): Miss => {
+    if ('word' in at) return holds(data.root, at.word.toLowerCase()) ? 'beside' : 'absent';
+    return 'character' in at || 'segment' in at ? 'absent' : 'beside';
+  },
   alt: ({ data, prep }) => treeAlt(data, prep.root, prep.chosen.size - 1, prep.total),
   draw: ({ data, prep, theme }, _notes, { width, narrow }) => drawTree({ data, root: prep.root, chosen: prep.chosen, theme, width, narrow }),
 });

@@ -29,7 +29,7 @@ import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { atLightness } from './ramp.ts';
-import { markerHeight, markerWidth, noteInline, notesInLane } from './notes.ts';
+import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 import { notesBelow } from './lanebelow.ts';
 
@@ -162,12 +162,23 @@ function treemapAlt(data: TreemapData, prep: Prepared): string {
 
 /* ---------- notes ---------- */
 
-/** A note goes on the rectangle that holds its item (by id, then label); several small items may share one. */
-function place(note: NoteAt, prep: Prepared): { cell: Cell } | Miss {
-  const at = note.category;
+/**
+ * A note goes on the rectangle that holds its item (by id, then label;
+ * several small items may share one); a character or word, on the item named
+ * after it. An item without a positive value has no rectangle: its note goes
+ * beside the chart. Chapters have no place here.
+ */
+function place(note: NoteAt, data: TreemapData, prep: Prepared): { cell: Cell } | Miss {
+  let at: string | undefined;
+  if (isDataAt(note)) at = note.category;
+  else {
+    const has = namedAs(note);
+    at = has ? data.items.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()))?.id : undefined;
+  }
   if (at === undefined) return 'absent';
   const cell = prep.cells.find((c) => c.members.some((m) => m.id === at)) ?? prep.cells.find((c) => c.members.some((m) => m.label === at));
-  return cell ? { cell } : 'absent';
+  if (cell) return { cell };
+  return data.items.some((i) => i.id === at || i.label === at) ? 'beside' : 'absent';
 }
 
 /* ---------- drawing ---------- */
@@ -350,7 +361,7 @@ export const treemap = defineChart({
   empty: ({ data, prep }) =>
     prep.items.length > 0 ? null : data.items.length === 0 ? 'the dataset has no items.' : 'every value is zero, negative or missing.',
   table: ({ data, prep }) => treemapTable(data, prep),
-  place: (at, { prep }) => place(at, prep),
+  place: (at, { data, prep }) => place(at, data, prep),
   alt: ({ data, prep }) => treemapAlt(data, prep),
   draw: ({ data, prep, opts, theme }, notes, { width, narrow }) => drawTreemap({ data, prep, opts, theme, notes, width, narrow }),
 });

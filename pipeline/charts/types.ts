@@ -16,11 +16,21 @@ export interface Table {
 }
 
 /**
- * What a note points at, in the dataset's own terms. Each kind's `place`
- * resolves it (see chart.ts); keys a kind does not use leave the note
- * beside the chart.
+ * What a note points at: in the text's terms, as the plan gives it once the
+ * notes stage has made it exact (`TextAt`), or in the dataset's own terms
+ * (`DataAt`). Each kind's `place` resolves either, once (see chart.ts).
  */
-export interface NoteAt {
+export type NoteAt = TextAt | DataAt;
+
+/** A chapter (its number from 1, and its title), a character (cast id and name), a word or phrase as typed, or an equal segment (from 1, of `of` when the measure counted by segments). */
+export type TextAt =
+  | { chapter: number; title: string }
+  | { character: string; name: string }
+  | { word: string }
+  | { segment: number; of: number | null };
+
+/** A target in the dataset's own terms; keys a kind does not use leave the note beside the chart. */
+export interface DataAt {
   /** A category of a bars dataset (its `categories[i]`), a row of a strip or matrix, a node, point, item or panel, by id or name. */
   category?: string;
   /** A position on the x axis of a lines/strip dataset, in its own units (segment index, or 0..1 for a strip); a line or span index of a concordance or text map. */

@@ -25,7 +25,10 @@ export interface PreparedPanel {
   svg: string;
   /** The same chart laid out for narrow screens (about 360 px), when the chart kind has one. */
   svgNarrow: string | null;
+  /** The chart's description: its summary, then a sentence for each note drawn (or the curator's own alt text). */
   alt: string;
+  /** The summary alone, without the notes (or the curator's own alt text): for cards and teasers. */
+  summary: string;
   table: Table;
   notes: PreparedNote[];
   /** Caption file, relative to the exhibit folder (as written in the plan). */

@@ -2,7 +2,8 @@ import { describe, it, expect } from 'vitest';
 import { structure } from '../../pipeline/measures/structure.ts';
 import { readFileSync } from 'node:fs';
 import { context, TALE } from './fixture.ts';
-import { resolveNote } from '../../pipeline/exhibit.ts';
+import { drawPanel, exactTarget } from '../../pipeline/stages/notes.ts';
+import { charts } from '../../pipeline/charts/index.ts';
 import { noteAnchorSchema } from '../../pipeline/plan/schema.ts';
 
 /** Word count by ICU's UAX #29 word boundaries (isWordLike segments). */
@@ -73,17 +74,22 @@ describe('curator notes on a two-level text', () => {
   const text = readFileSync(new URL('../fixtures/headings/two-level.txt', import.meta.url), 'utf8');
   const r = structure.compute(context(text), structure.params.parse({}));
   const bars = structure.views.bars!(r, { unit: 'words' });
+  const facts = { chapters: r.chapters, parts: r.parts, cast: [] };
+  const where = { file: 'exhibit.yaml', line: 1, column: 1, path: 'rooms[0].panels[0].notes[0]' };
 
   it('finds { part: 2, chapter: 2 } as the sixth chapter, and { chapter: 6 } as the same one', () => {
-    expect(resolveNote({ part: 2, chapter: 2 }, bars, r, [])).toEqual({ at: { category: 'Book Two, Chapter II' }, target: 'Book Two, Chapter II' });
-    expect(resolveNote({ chapter: 6 }, bars, r, [])).toEqual(resolveNote({ part: 2, chapter: 2 }, bars, r, []));
+    expect(exactTarget({ part: 2, chapter: 2 }, facts)).toEqual({ at: { chapter: 6, title: 'Book Two, Chapter II' }, target: 'Book Two, Chapter II' });
+    expect(exactTarget({ chapter: 6 }, facts)).toEqual(exactTarget({ part: 2, chapter: 2 }, facts));
+    const drawn = drawPanel(charts.bars, bars, {}, [{ at: { part: 2, chapter: 2 }, text: 'The miller’s chapter.', where }], facts);
+    expect(drawn.problems).toEqual([]);
+    expect(drawn.out.svg).toMatch(/data-category="Book Two, Chapter II">(?:(?!vt-bar-group).)*data-note="1"/);
   });
 
   it('says what is wrong with a part or chapter the text does not have', () => {
-    expect(resolveNote({ part: 4, chapter: 1 }, bars, r, [])).toMatchObject({ problem: 'the note points at part 4, but the text has 3 parts' });
-    expect(resolveNote({ part: 3, chapter: 2 }, bars, r, [])).toMatchObject({ problem: 'the note points at chapter 2 of Book Three, which has 1 chapter' });
+    expect(exactTarget({ part: 4, chapter: 1 }, facts)).toMatchObject({ problem: 'the note points at part 4, but the text has 3 parts' });
+    expect(exactTarget({ part: 3, chapter: 2 }, facts)).toMatchObject({ problem: 'the note points at chapter 2 of Book Three, which has 1 chapter' });
     const flat = structure.compute(context(TALE), structure.params.parse({}));
-    expect(resolveNote({ part: 1, chapter: 1 }, structure.views.bars!(flat, { unit: 'words' }), flat, [])).toMatchObject({ problem: 'the note points at part 1, but the text has no parts' });
+    expect(exactTarget({ part: 1, chapter: 1 }, { chapters: flat.chapters, parts: flat.parts, cast: [] })).toMatchObject({ problem: 'the note points at part 1, but the text has no parts' });
   });
 
   it('takes a part only together with a chapter in the plan', () => {
