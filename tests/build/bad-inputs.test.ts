@@ -110,6 +110,14 @@ beforeAll(async () => {
   expect(baseline.status).toBe(0);
 });
 
+/** Gives the copy its own cache, a copy of the warm one with every entry rewritten. */
+function warmCacheRewritten(ex: Exhibit, rewrite: (entry: string) => string): void {
+  const dir = join(ex.root, '.vitrine/cache');
+  mkdirSync(dir, { recursive: true });
+  cpSync(sharedCache, dir, { recursive: true });
+  for (const f of readdirSync(dir)) writeFileSync(join(dir, f), rewrite(readFileSync(join(dir, f), 'utf8')));
+}
+
 /** The "Text …: N words, M chapters" line and the chapter list of a check's output. */
 const reading = (stdout: string): string[] => stdout.split('\n').filter((l) => /^Text "|^\s+\d+\. /.test(l));
 
@@ -172,16 +180,8 @@ export const rows: BadInput[] = [
   {
     name: 'a cache entry of the wrong shape is computed again, with a warning',
     cache: 'own',
-    setup: (ex) => {
-      const dir = join(ex.root, '.vitrine/cache');
-      mkdirSync(dir, { recursive: true });
-      cpSync(sharedCache, dir, { recursive: true });
-      // Every entry keeps its envelope but loses its result.
-      for (const f of readdirSync(dir)) {
-        const entry = JSON.parse(readFileSync(join(dir, f), 'utf8'));
-        writeFileSync(join(dir, f), JSON.stringify({ ...entry, value: {} }));
-      }
-    },
+    // Every entry keeps its envelope but loses its result.
+    setup: (ex) => warmCacheRewritten(ex, (entry) => JSON.stringify({ ...JSON.parse(entry), value: {} })),
     status: 0,
     codes: ['cache/bad-entry'],
     says: [/warning: \d+ cached results could not be used \(.*\), so they were computed again and saved afresh/],
@@ -190,12 +190,7 @@ export const rows: BadInput[] = [
   {
     name: 'cache entries that are not cache entries at all are computed again when measuring a panel',
     cache: 'own',
-    setup: (ex) => {
-      const dir = join(ex.root, '.vitrine/cache');
-      mkdirSync(dir, { recursive: true });
-      cpSync(sharedCache, dir, { recursive: true });
-      for (const f of readdirSync(dir)) writeFileSync(join(dir, f), '[]');
-    },
+    setup: (ex) => warmCacheRewritten(ex, () => '[]'),
     args: (ex) => ['measure', ex.plan, '--panel', 'chapter-lengths'],
     status: 0,
     codes: ['cache/bad-entry'],
