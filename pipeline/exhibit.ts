@@ -130,6 +130,8 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
   });
   if (!loaded.plan || hasErrors(problems)) return empty();
   const jobs = planJobs(loaded.plan);
+  // Link previews need absolute addresses: without the site's address, say what is left out.
+  if (!jobs.exhibit.url) problems.push(atWhere(loaded.plan.exhibit.where, 'plan/no-url', {}));
   watch.push(...jobs.lexicons.map((l) => l.file));
   const language = jobs.exhibit.language;
 

@@ -152,6 +152,7 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
       // Checks in the schema that have a catalogue entry of their own name it in params.code.
       if (params.code === 'plan/blank') return wording('plan/blank', {});
       if (params.code === 'plan/bad-base') return wording('plan/bad-base', { detail: issue.message, hint: hint ?? '' });
+      if (params.code === 'plan/bad-url') return wording('plan/bad-url', { detail: issue.message, hint: hint ?? '' });
       return wording('plan/invalid', { detail: issue.message, hint });
     }
     case 'invalid_union':

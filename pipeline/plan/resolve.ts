@@ -82,7 +82,12 @@ export function resolvePlan(input: ResolveInput): Plan {
     version: 1,
     file: input.file,
     dir: input.dir,
-    exhibit: { ...exhibit, ...(introFile ? { intro: introFile } : {}), ...(rightsFile ? { rights: rightsFile } : {}) },
+    exhibit: {
+      ...exhibit,
+      ...(introFile ? { intro: introFile } : {}),
+      ...(rightsFile ? { rights: rightsFile } : {}),
+      where: { ...where(['exhibit']), ...source.keyAt([], 'exhibit') },
+    },
     texts: data.texts.map((text, t) => ({ ...text, source: file(['texts', t, 'source'], text.source), where: where(['texts', t]) })),
     cast: data.cast.map((member, c) => ({
       ...member,

@@ -67,6 +67,25 @@ function text(max: number) {
     });
 }
 
+const SITE_ADDRESS_HINT = 'write the address readers will open, with http:// or https://, e.g. "https://example.org/lamps/"';
+
+/** Why a string cannot be the exhibit's public address (an absolute http or https URL of a page), or null. */
+export function siteAddressProblem(s: string): string | null {
+  if (/[\s"'<>`\\]|[\u0000-\u001f\u007f]/u.test(s) || BIDI_CONTROLS.test(s)) {
+    return `the address ${JSON.stringify(s)} holds a character that has no place in a web address (a space, a quotation mark, a backslash or an invisible character)`;
+  }
+  let url: URL;
+  try {
+    url = new URL(s);
+  } catch {
+    return `${JSON.stringify(s)} is not an absolute web address`;
+  }
+  if (url.protocol !== 'https:' && url.protocol !== 'http:') return `the address ${JSON.stringify(s)} must start with https:// or http://`;
+  if (url.username || url.password) return `the address ${JSON.stringify(s)} must not carry a user name or password`;
+  if (url.search || url.hash || s.includes('?') || s.includes('#')) return `the address ${JSON.stringify(s)} must not carry a query ("?") or a fragment ("#")`;
+  return null;
+}
+
 /** A path to a file inside the exhibit folder, as the curator wrote it. */
 const filePath = text(LIMITS.path);
 
@@ -116,6 +135,17 @@ export const exhibitSchema = z
       })
       .default('/')
       .describe('Base path the site is served under: a path on the host that serves it, starting and ending with "/" (not a web address). Default "/".'),
+    url: z
+      .string()
+      .max(LIMITS.path)
+      .superRefine((s, ctx) => {
+        const problem = siteAddressProblem(s);
+        if (problem) ctx.addIssue({ code: 'custom', message: problem, params: { code: 'plan/bad-url', hint: SITE_ADDRESS_HINT } });
+      })
+      .optional()
+      .describe(
+        'The public address of the exhibit\'s home page once it is published, an absolute http or https URL such as "https://example.org/lamps/". Link previews (Open Graph and Twitter card tags), the social cards and the credit line of chart downloads need it to give absolute addresses. Optional, no default: without it pages carry no picture or address in their link previews, and check warns.',
+      ),
     credit: text(LIMITS.prose).optional().describe(`Credit line shown in the footer, at most ${LIMITS.prose} characters. Optional, no default.`),
     intro: filePath.optional().describe('MDX file shown on the home page, relative to the exhibit folder. Optional, no default.'),
     rights: filePath

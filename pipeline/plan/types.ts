@@ -35,9 +35,13 @@ export interface PlanExhibit {
   language: string;
   /** Base path the site is served under, starting and ending with "/"; default "/". */
   base: string;
+  /** The public address of the home page, an absolute http(s) URL as written. */
+  url?: string;
   credit?: string;
   intro?: PlanFile;
   rights?: PlanFile;
+  /** Where the `exhibit:` key is written. */
+  where: Where;
 }
 
 export interface PlanText {

@@ -138,6 +138,13 @@ export const catalogue = {
     hint: () => 'write a value, or remove it',
     example: {},
   }),
+  'plan/bad-url': entry<{ detail: string; hint: string }>({
+    title: 'A public address that is not a web address',
+    severity: 'error',
+    message: (a) => a.detail,
+    hint: given,
+    example: { detail: 'the address "ftp://example.org/lamps/" must start with https:// or http://', hint: 'write the address readers will open, with http:// or https://, e.g. "https://example.org/lamps/"' },
+  }),
   'plan/bad-base': entry<{ detail: string; hint: string }>({
     title: 'A base that is not a path',
     severity: 'error',
@@ -213,6 +220,16 @@ export const catalogue = {
     message: (a) => `the name "${a.name}" is given to both "${a.first}" and "${a.second}"`,
     hint: () => 'where it appears in the text it will be counted as ambiguous, not given to either; remove it from one of them if it means one character',
     example: { name: 'rook', first: 'tamsin', second: 'jory' },
+  }),
+
+  // ——— the site's public address ———
+  'plan/no-url': entry<Record<string, never>>({
+    title: 'No public address for link previews',
+    severity: 'warning',
+    message: () =>
+      'the plan gives no public address ("url") for the exhibit: link previews need absolute addresses, so pages carry their title and description for previews but no picture and no address, and chart downloads and embed snippets carry no link back',
+    hint: () => 'add the address readers will open under "exhibit:", e.g. url: https://example.org/lamps/ (the social cards are drawn either way)',
+    example: {},
   }),
 
   // ——— files the plan names ———

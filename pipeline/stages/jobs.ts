@@ -56,6 +56,8 @@ export interface ExhibitJobs {
     organiser: string;
     language: string;
     base: string;
+    /** The public address of the home page, ending in "/"; null when the plan gives none. */
+    url: string | null;
     credit: string | null;
     intro: string | null;
     rights: string | null;
@@ -77,6 +79,7 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
       organiser: plan.exhibit.organiser,
       language: plan.exhibit.language,
       base: plan.exhibit.base,
+      url: plan.exhibit.url ? siteAddress(plan.exhibit.url) : null,
       credit: plan.exhibit.credit ?? null,
       intro: plan.exhibit.intro ? rel(plan.exhibit.intro.absolute) : null,
       rights: plan.exhibit.rights ? rel(plan.exhibit.rights.absolute) : null,
@@ -134,4 +137,11 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
       })),
     })),
   };
+}
+
+/** The home page's address as links are made from it: parsed (so the host is in lower case) and ending in "/". */
+export function siteAddress(written: string): string {
+  const url = new URL(written);
+  if (!url.pathname.endsWith('/')) url.pathname += '/';
+  return url.href;
 }

@@ -76,6 +76,8 @@ export interface PreparedExhibit {
     organiser: string;
     language: string;
     base: string;
+    /** The public address of the home page (absolute, ending in "/"), or null: then link previews carry no picture or address. */
+    url: string | null;
     credit: string | null;
     intro: string | null;
     rights: string | null;
