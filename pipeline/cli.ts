@@ -30,6 +30,7 @@ import { nearest } from './plan/suggest.ts';
 import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './stages/output.ts';
 import type { Protected } from './stages/output.ts';
 import { readingProblems, readingReport } from './stages/reading.ts';
+import { shareSummary, writeSharePictures } from './stages/share.ts';
 
 export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
 
@@ -388,6 +389,8 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     const astro = await import('astro');
     await astro.build({ root: ROOT, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
     if (!existsSync(join(work, 'index.html'))) throw new Error('the site build finished without writing index.html');
+    const pictures = await writeSharePictures(result.prepared!, work, cacheDir(values));
+    log?.(shareSummary(pictures));
     markBuild(work);
   } catch (e) {
     rmSync(work, { recursive: true, force: true });
