@@ -6,7 +6,9 @@
  *   1. text model: tokens per second of buildTextModel on a large text, beside
  *      one plain regex tokenising pass over the same text;
  *   2. site build: the demo exhibit built by `vitrine build`, beside a bare
- *      Astro build of as many trivial pages, each with an inline SVG.
+ *      Astro build of as many trivial pages, each with an inline SVG;
+ *   and the share pictures: the demo's social cards and chart PNGs drawn with an
+ *      empty cache (cold), then taken from the cache (warm), per picture.
  * The large text is the King James Bible from Debian's bible-kjv package
  * (public domain, ~790k words) when installed, else a generated text of the
  * same size made from the demo text.
@@ -23,6 +25,8 @@ import type { MeasureContext } from '../pipeline/measures/types.ts';
 import { tagModel } from '../pipeline/nlp/tag.ts';
 import { wink } from '../pipeline/nlp/wink.ts';
 import type { ItsFunction } from 'wink-nlp';
+import { prepareExhibit } from '../pipeline/exhibit.ts';
+import { writeSharePictures } from '../pipeline/stages/share.ts';
 
 const json = process.argv.includes('--json');
 const root = resolve(import.meta.dirname, '..');
@@ -215,6 +219,30 @@ const large = largeText();
     figures.siteBuild = { pages, demoSeconds: round(demoSeconds), bareAstroSeconds: round(bareSeconds), ratio: round(demoSeconds / bareSeconds) };
     say(`Site build (${pages} HTML pages, warm cache, output on ${scratchBase})`);
     say(`  vitrine build ${demoSeconds.toFixed(2)} s · bare Astro build ${bareSeconds.toFixed(2)} s · ratio ${(demoSeconds / bareSeconds).toFixed(2)}×`);
+  } finally {
+    rmSync(scratch, { recursive: true, force: true });
+  }
+}
+
+// 4. Share pictures: drawing every card and chart PNG, then copying them from the cache.
+{
+  const scratch = mkdtempSync(join(scratchBase, 'vitrine-bench-'));
+  try {
+    const prepared = (await prepareExhibit(join(root, 'content/exhibit.yaml'), { cacheDir: join(scratch, 'cache') })).prepared!;
+    const cold = await writeSharePictures(prepared, join(scratch, 'cold'), join(scratch, 'cache'));
+    const warm = await writeSharePictures(prepared, join(scratch, 'warm'), join(scratch, 'cache'));
+    const n = cold.cards.drawn + cold.charts.drawn;
+    figures.pictures = {
+      cards: cold.cards.drawn,
+      chartPngs: cold.charts.drawn,
+      coldSeconds: round(cold.seconds),
+      coldMsPerPicture: round((cold.seconds * 1000) / n),
+      warmSeconds: round(warm.seconds),
+      warmMsPerPicture: round((warm.seconds * 1000) / n),
+      warmDrawn: warm.cards.drawn + warm.charts.drawn,
+    };
+    say(`Share pictures (${cold.cards.drawn} social cards, ${cold.charts.drawn} chart PNGs)`);
+    say(`  cold ${cold.seconds.toFixed(2)} s = ${((cold.seconds * 1000) / n).toFixed(1)} ms a picture · warm ${warm.seconds.toFixed(3)} s = ${((warm.seconds * 1000) / n).toFixed(2)} ms a picture (${warm.cards.drawn + warm.charts.drawn} redrawn)`);
   } finally {
     rmSync(scratch, { recursive: true, force: true });
   }
