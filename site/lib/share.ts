@@ -13,7 +13,7 @@ export function clip(s: string, max: number): string {
 
 export function panelCard(panel: PreparedPanel): { path: string; alt: string } {
   const e = exhibit.exhibit;
-  return { path: cardPath(panel.room, panel.id), alt: clip(`Card for “${panel.title}”, from ${e.title} by ${e.organiser}, with its chart. ${panel.alt}`, 420) };
+  return { path: cardPath(panel.room, panel.id), alt: clip(`Card for “${panel.title}”, from ${e.title} by ${e.organiser}, with its chart. ${panel.summary}`, 420) };
 }
 
 export function roomCard(room: PreparedRoom, index: number): { path: string; alt: string } {
