@@ -31,12 +31,14 @@
 import type { CastMember, Mentions, TextModel } from '../text/model.ts';
 import type { DialogueSettings } from '../measures/types.ts';
 import { findQuotes, type Quote, type QuoteProblem } from './quotes.ts';
-import type { Convention } from './marks.ts';
+import { marksSetting, type Convention, type ConventionMap } from './conventions.ts';
 import { CONTINUING_VERBS, RESUMING_VERBS, speechVerbs } from './verbs.ts';
 import { buildView } from './view.ts';
 import { matchPins } from './pins.ts';
 import { buildTurns, paragraphsWithTurns, type Rule, type Turn } from './turns.ts';
 import { adjacent, recentSpeakers, sceneIndex } from './scene.ts';
+import { mayBeEpithet, namesPerson, outsiderDescription } from './refs.ts';
+import { asksWho } from './tags.ts';
 import { resolvePronoun } from './pronouns.ts';
 import { allowed, chains, fillable, fillRun, seed, type ChainContext } from './chains.ts';
 import { findAddressees } from './addressees.ts';
@@ -55,6 +57,8 @@ export interface AttributedQuote extends Quote {
   rule: Rule;
   /** 0..1, rounded to two decimals. */
   confidence: number;
+  /** Rule "outsider": how the text names or describes the speaker outside the cast ("the maid", "Mrs Threlkeld"), when it does. */
+  outsider: string | null;
 }
 
 export interface DialogueTurn {
@@ -67,11 +71,16 @@ export interface DialogueTurn {
   addressee: string | null;
   rule: Rule;
   confidence: number;
+  /** Rule "outsider": the speaker's name or description in the text, when it gives one. */
+  outsider: string | null;
   words: number;
 }
 
 export interface DialogueAnalysis {
+  /** The convention of most of the text. */
   convention: Convention;
+  /** The convention of every chapter and scene. */
+  conventions: ConventionMap;
   quotes: AttributedQuote[];
   turns: DialogueTurn[];
   problems: QuoteProblem[];
@@ -93,12 +102,15 @@ function settle(t: Turn, member: number | null, rule: Rule, conf: number): void 
 
 /** Analyse the dialogue of a text: quotations, turns, speakers, addressees. */
 export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
-  const { model, cast, mentions } = input;
+  const { model, mentions } = input;
   const settings: DialogueSettings = { verbs: input.dialogue?.verbs ?? [], pins: input.dialogue?.pins ?? [] };
   const verbs = speechVerbs(settings.verbs);
-  const scan = findQuotes(model, settings.verbs);
+  const scan = findQuotes(model, settings.verbs, marksSetting(input.dialogue?.marks));
   const quotes = scan.quotes;
-  const idIndex = new Map(cast.map((c, i) => [c.id, i]));
+  const idIndex = new Map(input.cast.map((c, i) => [c.id, i]));
+  // A first-person narrator is "I" in the narrative, never "he" or "she".
+  const narrator = input.dialogue?.narrator ? (idIndex.get(input.dialogue.narrator) ?? null) : null;
+  const cast: CastMember[] = input.cast.map((c, i) => (i === narrator ? { ...c, pronoun: 'i' as CastMember['pronoun'] } : c));
 
   // Pins: a pinned quotation is speech.
   const pinOf = new Map<number, DialogueSettings['pins'][number]>();
@@ -112,46 +124,84 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
   }
 
   const v = buildView(model, cast, mentions, quotes);
-  const turns = buildTurns(v, quotes, verbs, scan.convention, (m) => cast[m]?.pronoun);
-  const scene = sceneIndex(v, model, verbs);
+  const turns = buildTurns(v, quotes, verbs, (m) => cast[m]?.pronoun);
+  // Heads of descriptions that speak in tags ("said the porter"): the text's own people outside the cast.
+  const speaking = new Set<string>();
+  for (const t of turns) {
+    const r = t.tag?.speaker;
+    const d = r ? outsiderDescription(r) : null;
+    if (d !== null && r?.kind === 'desc') speaking.add(d.split(' ').at(-1)!.toLowerCase());
+  }
+  const scene = sceneIndex(v, model, verbs, speaking);
   const chapterStart = (c: number): number => model.chapters[c].firstParagraph;
-  const ctx: ChainContext = { cast, scene, turns, chapterStart, withTurns: paragraphsWithTurns(turns) };
+  // Someone outside the cast gets a stand-in index past the cast while the rules run.
+  const outsiderNames: string[] = [];
+  const outsiderIndex = new Map<string, number>();
+  const outsider = (name: string): number => {
+    const key = name.toLowerCase();
+    let k = outsiderIndex.get(key);
+    if (k === undefined) {
+      k = cast.length + outsiderNames.length;
+      outsiderIndex.set(key, k);
+      outsiderNames.push(name);
+    }
+    return k;
+  };
+  const ctx: ChainContext = { cast, scene, turns, chapterStart, withTurns: paragraphsWithTurns(turns), outsider };
   const pctx = { model, cast, scene, turns };
+  const isOutside = (t: Turn, name: string | null, rule: Rule, conf: number): void => {
+    settle(t, name === null ? null : outsider(name), rule, conf);
+    t.outsider = true;
+    t.outsiderName = name;
+  };
 
   // 1. Pins; tags and beats that name someone; self-naming.
-  for (const t of turns) {
+  turns.forEach((t, i) => {
     if (t.tag?.to?.kind === 'cast') t.explicitTo = t.tag.to.member;
     const pin = t.quotes.map((qi) => pinOf.get(qi)).find((p) => p !== undefined);
     if (pin) {
       settle(t, pin.speaker === null ? null : (idIndex.get(pin.speaker) ?? null), 'pin', 1);
       if (pin.speaker === null) t.outsider = true;
       if (pin.addressee !== undefined) t.pinAddressee = pin.addressee === null ? null : (idIndex.get(pin.addressee) ?? null);
-      continue;
+      return;
     }
     const r = t.tag?.speaker;
     if (r?.kind === 'cast') {
       settle(t, r.member, 'tag', 0.95);
-      continue;
+      return;
     }
-    if (r?.kind === 'outsider') {
-      settle(t, null, 'outsider', 0.9);
-      t.outsider = true;
-      continue;
+    const described = r ? outsiderDescription(r) : null;
+    if (described !== null) {
+      isOutside(t, described, 'outsider', 0.9);
+      return;
+    }
+    if (r?.kind === 'pronoun' && r.gender === 'i' && narrator !== null) {
+      settle(t, narrator, 'tag-pronoun', 0.9);
+      return;
     }
     if (r?.kind === 'ambiguous') t.candidates = r.candidates;
     if (r?.kind === 'pronoun') t.pronoun = { gender: r.gender, token: t.tag!.token, continuing: CONTINUING_VERBS.has(t.tag!.verb), inTag: true };
     if (t.tag && RESUMING_VERBS.has(t.tag.verb)) t.resumes = true;
     if (t.selfNamed !== null && allowed(cast, t, t.selfNamed)) {
       settle(t, t.selfNamed, 'self-naming', 0.85);
-      continue;
+      return;
     }
-    if (r) continue;
+    // A reply that gives a name to "Who are you?" is that person's: "Lucy Venn, ma'am."
+    const prev = turns[i - 1];
+    if (t.introduces !== null && adjacent(prev, t) && asksWho(prev.quotes.map((qi) => quotes[qi].text).join(' ')) && allowed(cast, t, t.introduces)) {
+      settle(t, t.introduces, 'self-naming', 0.85);
+      return;
+    }
+    if (r) return;
     const b = t.beats[0]?.subject;
+    const bd = b ? outsiderDescription(b) : null;
     if (b?.kind === 'cast' && allowed(cast, t, b.member)) settle(t, b.member, 'beat', 0.8);
     else if (b?.kind === 'ambiguous') t.candidates = b.candidates;
+    else if (b?.kind === 'pronoun' && b.gender === 'i' && narrator !== null) settle(t, narrator, 'beat', 0.8);
     else if (b?.kind === 'pronoun') t.pronoun = { gender: b.gender, token: t.beats[0].token, continuing: false, inTag: false };
+    else if (bd !== null && (b!.kind === 'outsider' || (namesPerson(bd, speaking) && !mayBeEpithet(bd)))) isOutside(t, bd, 'outsider', 0.75);
     else if (b?.kind === 'desc' || b?.kind === 'outsider') t.described = true;
-  }
+  });
 
   // 2. Pronouns settled by their own paragraph (or by being the only fitting member).
   const pronounRule = (t: Turn): Rule => (t.pronoun?.inTag ? 'tag-pronoun' : 'beat');
@@ -159,8 +209,7 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
     if (t.fixed || !t.pronoun) return;
     const res = t.pronoun.continuing ? null : resolvePronoun(pctx, i, t.pronoun.gender, t.pronoun.token, { local: true });
     if (res?.member === -1) {
-      settle(t, null, 'outsider', res.conf);
-      t.outsider = true;
+      isOutside(t, res.name ?? null, 'outsider', res.conf);
     } else if (res && res.conf >= 0.62 && allowed(cast, t, res.member)) settle(t, res.member, pronounRule(t), t.pronoun.inTag ? res.conf : Math.round(res.conf * 90) / 100);
     else t.gender = t.pronoun.gender;
   });
@@ -208,29 +257,36 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
     }
   });
 
-  // 6. Threshold.
+  // 6. Threshold; turns given to someone outside the cast have no speaker.
   for (const t of turns) {
     if (t.speaker !== null && t.conf < MIN_CONFIDENCE) {
       t.speaker = null;
       t.rule = 'none';
       t.conf = 0;
     }
+    if (t.speaker !== null && t.speaker >= cast.length) {
+      t.outsiderName = outsiderNames[t.speaker - cast.length];
+      t.outsider = true;
+      t.speaker = null;
+      t.rule = 'outsider';
+    }
   }
 
   // Results.
   const addressees = findAddressees(turns, cast, scene, chapterStart);
-  const out: AttributedQuote[] = quotes.map((q) => ({ ...q, turn: null, speaker: null, addressee: null, rule: 'text', confidence: 1 }));
+  const out: AttributedQuote[] = quotes.map((q) => ({ ...q, turn: null, speaker: null, addressee: null, rule: 'text', confidence: 1, outsider: null }));
   const result: DialogueTurn[] = turns.map((t, i) => {
     const speaker = t.speaker === null ? null : cast[t.speaker].id;
     const a = addressees[i];
     const addressee = a === null ? null : cast[a].id;
     const confidence = Math.round(t.conf * 100) / 100;
+    const outsider = t.rule === 'outsider' ? t.outsiderName : null;
     let words = 0;
     for (const qi of t.quotes) {
-      Object.assign(out[qi], { turn: i, speaker, addressee, rule: t.rule, confidence });
+      Object.assign(out[qi], { turn: i, speaker, addressee, rule: t.rule, confidence, outsider });
       words += quotes[qi].words;
     }
-    return { index: i, quotes: t.quotes, chapter: t.chapter, speaker, addressee, rule: t.rule, confidence, words };
+    return { index: i, quotes: t.quotes, chapter: t.chapter, speaker, addressee, rule: t.rule, confidence, outsider, words };
   });
-  return { convention: scan.convention, quotes: out, turns: result, problems: scan.problems };
+  return { convention: scan.convention, conventions: scan.conventions, quotes: out, turns: result, problems: scan.problems };
 }

@@ -24,6 +24,12 @@
  * addressed, ambiguous name's owners); else the most frequent speakers of the
  * 40 turns before it, likewise.
  *
+ * Someone outside the cast, once known (a tag such as "said the maid", or
+ * the seed below), is an anchor like any other speaker: the turns that answer
+ * them go to the other side of their exchange, and the turns their parity
+ * gives them stay outside the cast (rule "outsider"). Their speech never
+ * feeds a cast member's parity.
+ *
  * Only turns of pure dialogue, or with a tag or a beat that names nobody for
  * sure ("said the old man", "The old man smiled.", "she said", "said
  * Calloway" when two share the name), are filled. Another turn
@@ -56,6 +62,8 @@ export interface ChainContext {
   chapterStart: (chapter: number) => number;
   /** Paragraphs that hold a turn. */
   withTurns: ReadonlySet<number>;
+  /** The stand-in speaker for someone outside the cast, by name or description (an index past the cast). */
+  outsider: (name: string) => number;
 }
 
 /** Speakers of the 40 turns before turn i, in any chapter, most turns first: who the text is mostly about lately. */
@@ -73,8 +81,9 @@ export function fillable(t: Turn): boolean {
   return !t.fixed && (t.pure || t.tag !== null || t.described || t.pronoun !== null || t.candidates !== null);
 }
 
+/** Whether speaker m may speak turn t. m past the cast is someone outside it (of unknown pronoun). */
 export function allowed(cast: CastMember[], t: Turn, m: number): boolean {
-  return !t.vocatives.includes(m) && (t.candidates === null || t.candidates.includes(m)) && (t.gender === null || fitsGender(cast[m].pronoun, t.gender));
+  return !t.vocatives.includes(m) && (t.candidates === null || t.candidates.includes(m)) && (t.gender === null || fitsGender(cast[m]?.pronoun, t.gender));
 }
 
 /** Runs of adjacent turns, split at turns that can be neither anchors nor filled. */
@@ -82,7 +91,7 @@ export function chains(turns: readonly Turn[]): number[][] {
   const out: number[][] = [];
   let cur: number[] = [];
   turns.forEach((t, i) => {
-    const anchor = t.fixed && t.speaker !== null && !t.outsider;
+    const anchor = t.fixed && t.speaker !== null;
     const usable = anchor || fillable(t);
     if (cur.length && (!usable || !adjacent(turns[cur[cur.length - 1]], t))) {
       out.push(cur);
@@ -96,11 +105,12 @@ export function chains(turns: readonly Turn[]): number[][] {
 
 /**
  * Give the first turn of a run to whoever acts in the narrative paragraph just
- * before it: a cast member named before a verb in its last sentence (the
- * latest first), else one acting anywhere in that paragraph — the first who
- * fits the turn. When the last sentence's latest actor is a name outside the
- * cast ("Clem stood on the step") and the turn is pure dialogue, the turn is
- * theirs: no cast speaker.
+ * before it: a cast member acting in its last sentence (the subjects of its
+ * clauses first, in text order, then others named before a verb), else one
+ * acting anywhere in that paragraph (the latest first) — the first who fits
+ * the turn. When the last sentence's first actor is someone outside the
+ * cast ("Clem stood on the step", "The maid put her head in at the door")
+ * and the turn is pure dialogue, the turn is theirs: no cast speaker.
  */
 export function seed(ctx: ChainContext, run: readonly number[]): void {
   const t = ctx.turns[run[0]];
@@ -110,10 +120,13 @@ export function seed(ctx: ChainContext, run: readonly number[]): void {
   const agents = ctx.scene.mentionsOf(p).filter((m) => m.agent);
   if (agents.length === 0) return;
   const lastSentence = agents[agents.length - 1].sentence;
-  const inLast = agents.filter((m) => m.sentence === lastSentence).reverse();
+  // In the last sentence the main clause's subject comes first ("He had carried for them since before Wilf was born").
+  const lastOnes = agents.filter((m) => m.sentence === lastSentence);
+  const inLast = [...lastOnes.filter((m) => m.subject), ...lastOnes.filter((m) => !m.subject)];
   if (inLast[0].member < 0) {
     if (!t.pure) return; // the turn's own tag or beat may say otherwise
-    t.speaker = null;
+    t.speaker = ctx.outsider(inLast[0].name ?? 'someone outside the cast');
+    t.outsiderName = inLast[0].name;
     t.rule = 'outsider';
     t.conf = 0.6;
     t.fixed = true;

@@ -2,17 +2,24 @@
  * Scoring attribution against a hand-annotated gold list.
  *
  * Gold file: tab-separated, lines starting with # are comments, a header line
- * `n chapter kind speaker addressee first_words`, then one row per quoted span
+ * naming the columns — `n chapter kind speaker addressee first_words`, with an
+ * optional `marks` column before first_words — then one row per quoted span
  * in text order. speaker/addressee are cast ids or "-" (nobody in the cast).
- * Gold rows are aligned with the quotations found by matching the chapter and
- * the first words (compared as pins are: case, marks and spacing ignored),
- * searching forward from the last match.
+ * marks is the convention the speech is printed in (double, single,
+ * guillemets, low, dash); a file without the column may say it once in a
+ * comment line "# marks: single". Gold rows are aligned with the quotations
+ * found by matching the chapter and the first words (compared as pins are:
+ * case, marks and spacing ignored), searching forward from the last match.
  *
  * Figures:
  *   accuracy      correct speakers ÷ gold speech rows whose speaker is in the cast
  *                 (a null, or a quotation not found, counts as wrong)
  *   null rate     null speakers ÷ the same rows
- *   per rule      the same accuracy among the rows each rule decided
+ *   per rule      among the rows each rule decided: correct, wrong, null, and
+ *                 addressees correct ÷ those rows with a cast addressee
+ *   per marks     the same accuracy and null rate per gold convention
+ *   outsiders     gold speech rows spoken by someone outside the cast: how many
+ *                 were left null, and by which rule the others went to the cast
  *   addressees    correct ÷ gold speech rows whose addressee is in the cast
  */
 
@@ -29,20 +36,49 @@ export interface GoldRow {
   kind: 'speech' | 'text';
   speaker: string | null;
   addressee: string | null;
+  /** The convention the quotation is printed in, or null when the file does not say. */
+  marks: string | null;
   firstWords: string;
 }
+
+const REQUIRED = ['n', 'chapter', 'kind', 'speaker', 'addressee', 'first_words'];
 
 /** Read a gold file (see the module comment for its layout). */
 export function parseGold(tsv: string): GoldRow[] {
   const rows: GoldRow[] = [];
+  let columns = REQUIRED;
+  let defaultMarks: string | null = null;
   for (const [i, line] of tsv.split(/\r?\n/).entries()) {
-    if (line.trim() === '' || line.startsWith('#') || line.startsWith('n\t')) continue;
+    if (line.trim() === '') continue;
+    if (line.startsWith('#')) {
+      const m = /^#\s*marks:\s*(\S+)\s*$/.exec(line);
+      if (m) defaultMarks = m[1];
+      continue;
+    }
+    if (line.startsWith('n\t')) {
+      columns = line.split('\t').map((c) => c.trim());
+      const missing = REQUIRED.filter((c) => !columns.includes(c));
+      if (missing.length || columns[columns.length - 1] !== 'first_words') {
+        throw new Error(`gold line ${i + 1}: the header must name ${REQUIRED.join(', ')} (first_words last); it lacks ${missing.join(', ') || 'first_words at the end'}`);
+      }
+      continue;
+    }
     const f = line.split('\t');
-    if (f.length < 6 || !/^\d+$/.test(f[0]) || !/^\d+$/.test(f[1]) || (f[2] !== 'speech' && f[2] !== 'text')) {
-      throw new Error(`gold line ${i + 1} is not "n, chapter, kind, speaker, addressee, first words" separated by tabs: ${line}`);
+    const at = (c: string): string => f[columns.indexOf(c)] ?? '';
+    const fixed = columns.length - 1;
+    if (f.length < columns.length || !/^\d+$/.test(at('n')) || !/^\d+$/.test(at('chapter')) || (at('kind') !== 'speech' && at('kind') !== 'text')) {
+      throw new Error(`gold line ${i + 1} is not "${columns.join(', ')}" separated by tabs: ${line}`);
     }
     const id = (s: string): string | null => (s === '-' || s === '' ? null : s);
-    rows.push({ n: Number(f[0]), chapter: Number(f[1]), kind: f[2], speaker: id(f[3]), addressee: id(f[4]), firstWords: f.slice(5).join('\t') });
+    rows.push({
+      n: Number(at('n')),
+      chapter: Number(at('chapter')),
+      kind: at('kind') as 'speech' | 'text',
+      speaker: id(at('speaker')),
+      addressee: id(at('addressee')),
+      marks: columns.includes('marks') ? at('marks') : defaultMarks,
+      firstWords: f.slice(fixed).join('\t'),
+    });
   }
   return rows;
 }
@@ -54,6 +90,20 @@ export interface Score {
   accuracy: number;
 }
 
+export interface RuleScore extends Score {
+  /** Given to another cast member. */
+  wrong: number;
+  /** Left without a speaker (or the quotation was not found). */
+  nulls: number;
+  /** Rows of this rule whose gold addressee is in the cast, and how many got it. */
+  addressees: Score;
+}
+
+export interface SpeakerScore extends Score {
+  nulls: number;
+  nullRate: number;
+}
+
 export interface EvalFigures {
   /** Gold rows, and how many were matched to a quotation. */
   gold: number;
@@ -62,10 +112,12 @@ export interface EvalFigures {
   missed: { n: number; chapter: number; firstWords: string }[];
   /** Quotations found that no gold row names. */
   extra: number;
-  speakers: Score & { nulls: number; nullRate: number };
-  perRule: Record<string, Score>;
-  /** Gold speech rows spoken by someone outside the cast, and how many of them were left null. */
-  outsiders: { total: number; nulls: number };
+  speakers: SpeakerScore;
+  perRule: Record<string, RuleScore>;
+  /** Speaker accuracy per gold convention ("unstated" when the gold file does not say). */
+  perMarks: Record<string, SpeakerScore>;
+  /** Gold speech rows spoken by someone outside the cast: how many were left null, and the rules that gave the others to the cast. */
+  outsiders: { total: number; nulls: number; givenBy: Record<string, number> };
   addressees: Score & { nulls: number };
   kinds: Score;
   /** Every wrong or null speaker, for reading. */
@@ -97,59 +149,69 @@ export function alignGold(quotes: readonly AttributedQuote[], gold: readonly Gol
 /** Score an analysis against gold rows. */
 export function scoreDialogue(analysis: DialogueAnalysis, gold: readonly GoldRow[]): EvalFigures {
   const align = alignGold(analysis.quotes, gold);
-  const perRule: Record<string, Score> = {};
+  const perRule: Record<string, RuleScore> = {};
+  const perMarks: Record<string, SpeakerScore> = {};
   const errors: EvalFigures['errors'] = [];
-  let spk = 0;
-  let spkOk = 0;
-  let nulls = 0;
-  let outs = 0;
-  let outNull = 0;
-  let adr = 0;
-  let adrOk = 0;
-  let adrNull = 0;
-  let kinds = 0;
-  let kindOk = 0;
+  const speakers: SpeakerScore = { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 };
+  const outsiders: EvalFigures['outsiders'] = { total: 0, nulls: 0, givenBy: {} };
+  const addressees = { total: 0, correct: 0, accuracy: 0, nulls: 0 };
+  const kinds = { total: 0, correct: 0, accuracy: 0 };
   gold.forEach((g, i) => {
     const q = align[i] >= 0 ? analysis.quotes[align[i]] : null;
-    kinds++;
-    if (q && q.kind === g.kind) kindOk++;
+    kinds.total++;
+    if (q && q.kind === g.kind) kinds.correct++;
     if (g.kind !== 'speech') return;
+    const got = q?.speaker ?? null;
+    const rule = q?.rule ?? 'missed';
     if (g.speaker === null) {
-      outs++;
-      if (!q || q.speaker === null) outNull++;
+      outsiders.total++;
+      if (got === null) outsiders.nulls++;
+      else outsiders.givenBy[rule] = (outsiders.givenBy[rule] ?? 0) + 1;
     } else {
-      spk++;
-      const got = q?.speaker ?? null;
-      const rule = q?.rule ?? 'missed';
-      const r = (perRule[rule] ??= { total: 0, correct: 0, accuracy: 0 });
-      r.total++;
+      const r = (perRule[rule] ??= { total: 0, correct: 0, accuracy: 0, wrong: 0, nulls: 0, addressees: { total: 0, correct: 0, accuracy: 0 } });
+      const m = (perMarks[g.marks ?? 'unstated'] ??= { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 });
+      for (const s of [speakers, r, m]) s.total++;
       if (got === g.speaker) {
-        spkOk++;
-        r.correct++;
+        for (const s of [speakers, r, m]) s.correct++;
       } else {
-        if (got === null) nulls++;
+        if (got === null) for (const s of [speakers, r, m]) s.nulls++;
+        else r.wrong++;
         errors.push({ n: g.n, chapter: g.chapter, firstWords: g.firstWords, gold: g.speaker, got, rule, confidence: q?.confidence ?? 0 });
+      }
+      if (g.addressee !== null) {
+        r.addressees.total++;
+        if ((q?.addressee ?? null) === g.addressee) r.addressees.correct++;
       }
     }
     if (g.addressee !== null) {
-      adr++;
-      const got = q?.addressee ?? null;
-      if (got === g.addressee) adrOk++;
-      else if (got === null) adrNull++;
+      addressees.total++;
+      const a = q?.addressee ?? null;
+      if (a === g.addressee) addressees.correct++;
+      else if (a === null) addressees.nulls++;
     }
   });
-  for (const r of Object.values(perRule)) r.accuracy = ratio(r.correct, r.total);
+  for (const s of [speakers, ...Object.values(perMarks)]) {
+    s.accuracy = ratio(s.correct, s.total);
+    s.nullRate = ratio(s.nulls, s.total);
+  }
+  for (const r of Object.values(perRule)) {
+    r.accuracy = ratio(r.correct, r.total);
+    r.addressees.accuracy = ratio(r.addressees.correct, r.addressees.total);
+  }
+  addressees.accuracy = ratio(addressees.correct, addressees.total);
+  kinds.accuracy = ratio(kinds.correct, kinds.total);
   const used = new Set(align.filter((k) => k >= 0));
   return {
     gold: gold.length,
     matched: used.size,
     missed: gold.filter((_, i) => align[i] < 0).map((g) => ({ n: g.n, chapter: g.chapter, firstWords: g.firstWords })),
     extra: analysis.quotes.length - used.size,
-    speakers: { total: spk, correct: spkOk, accuracy: ratio(spkOk, spk), nulls, nullRate: ratio(nulls, spk) },
+    speakers,
     perRule,
-    outsiders: { total: outs, nulls: outNull },
-    addressees: { total: adr, correct: adrOk, accuracy: ratio(adrOk, adr), nulls: adrNull },
-    kinds: { total: kinds, correct: kindOk, accuracy: ratio(kindOk, kinds) },
+    perMarks,
+    outsiders,
+    addressees,
+    kinds,
     errors,
   };
 }

@@ -1,10 +1,13 @@
 /**
- * Quotation marks as UTF-16 code units, and which convention a text uses.
- *
- * Two conventions are read: "double" (speech in “…” or "…", quotations inside
- * speech in ‘…’) and "single" (speech in ‘…’ or '…', quotations inside speech
- * in “…”). The right single mark ’ doubles as the apostrophe, so in the single
- * convention it has to be told apart from a closing mark (see quotes.ts).
+ * Quotation marks as UTF-16 code units, and the words that tell an apostrophe
+ * from a single quotation mark. The right single mark ’ (and the straight ')
+ * doubles as the apostrophe, so wherever single marks set off speech, or a
+ * quotation inside it, a right mark has to be told apart from a closing mark
+ * by general typographic rules (scan.ts): a mark between two letters is an
+ * apostrophe (don’t, o’er); a mark before a letter opens or elides (’tis);
+ * only a mark after a letter and before a space is ambiguous (runnin’, the
+ * boys’). The short word lists below are the fallback for that last case and
+ * for a mark at a paragraph's start; they are not the main rule.
  */
 
 export const LDQ = 0x201c; // “
@@ -16,8 +19,9 @@ export const RSQ = 0x2019; // ’
 export const SQ = 0x27; // '
 export const LAQUO = 0xab; // «
 export const RAQUO = 0xbb; // »
-
-export type Convention = 'double' | 'single';
+export const LOW_SQ = 0x201a; // ‚
+export const LSAQUO = 0x2039; // ‹
+export const RSAQUO = 0x203a; // ›
 
 export function isDoubleMark(c: number): boolean {
   return c === LDQ || c === RDQ || c === LOW_DQ || c === DQ || c === LAQUO || c === RAQUO;
@@ -80,40 +84,4 @@ export function wordStartingAt(text: string, i: number, to: number): string {
   let b = i;
   while (b < to && /\p{L}/u.test(text[b])) b++;
   return text.slice(i, b).toLowerCase();
-}
-
-/**
- * Which convention the text uses: count the paragraphs that open with a double
- * mark and those that open with a single mark (an elision such as ’Tis does
- * not count); the larger count wins, double on a tie. When no paragraph opens
- * with a mark, count opening marks anywhere (a mark after a space or a
- * paragraph edge and before a letter).
- */
-export function detectConvention(text: string, paragraphs: { start: ArrayLike<number>; end: ArrayLike<number>; count: number }): Convention {
-  let d = 0;
-  let s = 0;
-  for (let p = 0; p < paragraphs.count; p++) {
-    const a = paragraphs.start[p];
-    const b = paragraphs.end[p];
-    const c = text.charCodeAt(a);
-    if (c === LDQ || c === DQ || c === LOW_DQ || c === LAQUO) d++;
-    else if ((c === LSQ || c === SQ) && isWordCharAt(text, a + 1)) {
-      if (!LEADING_ELISIONS.has(wordStartingAt(text, a + 1, b)) || c === LSQ) s++;
-    }
-  }
-  if (d + s > 0) return s > d ? 'single' : 'double';
-  let dd = 0;
-  let ss = 0;
-  for (let p = 0; p < paragraphs.count; p++) {
-    const a = paragraphs.start[p];
-    const b = paragraphs.end[p];
-    for (let i = a; i < b; i++) {
-      const c = text.charCodeAt(i);
-      if (!isQuoteMark(c)) continue;
-      if (!isSpaceAt(text, i - 1, a, b) || !isWordCharAt(text, i + 1)) continue;
-      if (c === LDQ || c === DQ || c === LOW_DQ) dd++;
-      else if (c === LSQ || (c === SQ && !LEADING_ELISIONS.has(wordStartingAt(text, i + 1, b)))) ss++;
-    }
-  }
-  return ss > dd ? 'single' : 'double';
 }

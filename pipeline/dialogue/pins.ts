@@ -10,6 +10,7 @@
 import type { CastMember, TextModel } from '../text/model.ts';
 import type { DialogueSettings } from '../measures/types.ts';
 import { findQuotes, type Quote } from './quotes.ts';
+import { marksSetting } from './conventions.ts';
 
 export type DialoguePin = DialogueSettings['pins'][number];
 
@@ -17,8 +18,8 @@ export type DialoguePin = DialogueSettings['pins'][number];
 export function pinForm(s: string): string {
   return s
     .toLowerCase()
-    .replace(/[\u2018\u2019\u02bc`]/g, "'")
-    .replace(/[\u201c\u201d\u201e"\u00ab\u00bb]/g, '')
+    .replace(/[\u2018\u2019\u201a\u02bc`]/g, "'")
+    .replace(/[\u201c\u201d\u201e"\u00ab\u00bb\u2039\u203a]/g, '')
     .replace(/\s+/g, ' ')
     .replace(/^[\s'.,;:!?\u2014\u2013-]+/, '')
     .trim();
@@ -52,7 +53,7 @@ export interface PinProblem {
 export function checkPins(model: TextModel, dialogue: DialogueSettings | undefined, cast: readonly CastMember[]): PinProblem[] {
   const pins = dialogue?.pins ?? [];
   if (pins.length === 0) return [];
-  const { quotes } = findQuotes(model, dialogue?.verbs ?? []);
+  const { quotes } = findQuotes(model, dialogue?.verbs ?? [], marksSetting(dialogue?.marks));
   const matches = matchPins(quotes, pins);
   const ids = new Set(cast.map((c) => c.id));
   const out: PinProblem[] = [];

@@ -20,8 +20,9 @@
  * else 0.45 (below the threshold). A single
  * candidate gets 0.8 unless it is addressed. In `local` mode only the
  * paragraph's own mentions and a single candidate count. When the latest
- * person acting before the pronoun is named but outside the cast, the result
- * is member −1: someone outside the cast.
+ * person acting before the pronoun is named or described but outside the
+ * cast ("Clem", "the postman"), the result is member −1 with that name:
+ * someone outside the cast.
  */
 
 import type { CastMember } from '../text/model.ts';
@@ -38,23 +39,24 @@ export interface PronounContext {
 }
 
 /**
- * Whether the latest person acting before the pronoun (in its paragraph or the
- * one before) is named but outside the cast, with no fitting cast member
- * named after them: then the pronoun is theirs ("The Widow Carrow sat in the
- * kitchen. … “It’s here,” she said.").
+ * Who the pronoun stands for when the latest person acting before it (in its
+ * paragraph or the one before) is named or described but outside the cast,
+ * with no fitting cast member named after them ("The Widow Carrow sat in the
+ * kitchen. … “It’s here,” she said."; "The postman stood stamping in the
+ * yard. … he said"): their name or description; else null.
  */
-function outsiderBefore(ctx: PronounContext, g: Gender, token: number): boolean {
+function outsiderBefore(ctx: PronounContext, g: Gender, token: number): string | null {
   const p = ctx.model.tokens.paragraph[token];
   const first = ctx.model.chapters[ctx.model.paragraphs.chapter[p]].firstParagraph;
   for (let q = p; q >= Math.max(first, p - 1); q--) {
     const l = ctx.scene.mentionsOf(q).filter((m) => m.token < token);
     for (let k = l.length - 1; k >= 0; k--) {
       const m = l[k];
-      if (m.member >= 0 && fitsGender(ctx.cast[m.member].pronoun, g)) return false;
-      if (m.member < 0 && m.agent) return true;
+      if (m.member >= 0 && fitsGender(ctx.cast[m.member].pronoun, g)) return null;
+      if (m.member < 0 && m.agent) return m.name;
     }
   }
-  return false;
+  return null;
 }
 
 export function resolvePronoun(
@@ -63,10 +65,11 @@ export function resolvePronoun(
   g: Gender,
   token: number,
   opts: { expected?: number | null; continuing?: boolean; local?: boolean } = {},
-): { member: number; conf: number } | null {
+): { member: number; conf: number; name?: string } | null {
   const { model, cast, scene, turns } = ctx;
   const w = turns[i];
-  if (outsiderBefore(ctx, g, token)) return { member: -1, conf: 0.6 };
+  const outsider = outsiderBefore(ctx, g, token);
+  if (outsider !== null) return { member: -1, conf: 0.6, name: outsider };
   const compatible = cast.map((_, k) => k).filter((k) => fitsGender(cast[k].pronoun, g) && (w.candidates === null || w.candidates.includes(k)));
   if (compatible.length === 0) return null;
   if (compatible.length === 1) return w.vocatives.includes(compatible[0]) ? null : { member: compatible[0], conf: 0.8 };

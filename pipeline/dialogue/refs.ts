@@ -11,6 +11,7 @@
  */
 
 import { gapBetween, isCapitalised, surface, word, type TokenView } from './view.ts';
+import { IRREGULAR_PASTS, looksPast, SPEECH_VERBS } from './verbs.ts';
 
 export type Gender = 'he' | 'she' | 'they' | 'it' | 'i' | 'we' | 'you';
 
@@ -165,7 +166,7 @@ export function refAt(v: TokenView, cl: readonly number[], k: number, role: 'sub
       const inner = mentionAt(v, cl, j);
       if (inner) return inner.kind === 'desc' ? { ...inner, first: k } : { ...inner, first: k };
       const wj = word(v, cl[j]);
-      if (PHRASE_STOPS.has(wj) || isAdverb(v, cl[j]) || v.quoteOf[cl[j]] >= 0) break;
+      if (PHRASE_STOPS.has(wj) || isAdverb(v, cl[j]) || v.quoteOf[cl[j]] >= 0 || verbAt(v, cl, j)) break;
       j++;
     }
     if (j === k + 1) return null;
@@ -173,6 +174,110 @@ export function refAt(v: TokenView, cl: readonly number[], k: number, role: 'sub
   }
   if (isCapitalised(v, t) && !NOT_NAMES.has(w)) return names(v, cl, k);
   return null;
+}
+
+/**
+ * Whether clause position j holds the verb after a noun phrase rather than a
+ * word of it: a speech verb or a common irregular past ("the boy answered",
+ * "the maid came"), or an -ed form that ends the clause or comes before a
+ * preposition or a pronoun ("the maid curtsied", "the old man smiled at her",
+ * but not "the bearded man").
+ */
+function verbAt(v: TokenView, cl: readonly number[], j: number): boolean {
+  const w = word(v, cl[j]);
+  if (SPEECH_VERBS.has(w) || IRREGULAR_PASTS.has(w)) return true;
+  if (!looksPast(w)) return false;
+  if (j + 1 >= cl.length || cl[j + 1] !== cl[j] + 1) return true;
+  const next = word(v, cl[j + 1]);
+  return PHRASE_STOPS.has(next) || next in OBJECT_PRONOUNS || DETERMINERS.has(next) || isAdverb(v, cl[j + 1]);
+}
+
+/** Head words of a description that do not name one person (anaphora, groups, a voice). common practice, no source. */
+const NOT_PERSONS: ReadonlySet<string> = new Set([
+  'voice', 'voices', 'other', 'others', 'one', 'ones', 'former', 'latter', 'first', 'second', 'third', 'last', 'younger',
+  'elder', 'older', 'eldest', 'youngest', 'rest', 'two', 'three', 'four', 'both', 'all', 'each', 'pair', 'couple',
+  'company', 'crowd', 'group', 'party', 'same', 'stranger', 'newcomer', 'speaker', 'figure', 'shape', 'somebody',
+  'someone', 'everybody', 'everyone', 'nobody', 'anyone', 'anybody', 'who', 'whole', 'room', 'house', 'table',
+]);
+
+/** Kin and close companions: "his mother", "her friend" may well be a cast member. common practice, no source. */
+const RELATIONS: ReadonlySet<string> = new Set([
+  'mother', 'father', 'brother', 'sister', 'son', 'daughter', 'wife', 'husband', 'uncle', 'aunt', 'cousin', 'niece',
+  'nephew', 'grandmother', 'grandfather', 'granddaughter', 'grandson', 'parent', 'parents', 'child', 'children', 'friend',
+  'companion', 'partner', 'lover', 'sweetheart', 'fiance', 'fiancé', 'fiancée', 'guardian', 'ward', 'mistress', 'master',
+  'brother-in-law', 'sister-in-law', 'mother-in-law', 'father-in-law', 'stepmother', 'stepfather', 'twin', 'mamma', 'papa',
+]);
+
+const ARTICLES: ReadonlySet<string> = new Set(['the', 'a', 'an', 'this', 'that', 'another', 'some', 'one', 'old', 'young', 'little', 'poor']);
+const POSSESSIVES: ReadonlySet<string> = new Set(['his', 'her', 'their', 'my', 'our', 'your', 'its']);
+
+/**
+ * The description of someone outside the cast that a referring expression
+ * gives, or null: a capitalised name the cast does not know ("Mrs
+ * Threlkeld"), or a noun phrase led by an article ("the maid", "a boy", "the
+ * old lady", "the second fisherman") or by a possessive before a word that is
+ * not kin ("her neighbour"). Not: anaphora and groups ("the other", "the
+ * younger", "both"), a voice, someone unnamed ("a stranger", "someone"), or
+ * kin ("his mother": that may be a cast member the plan has not given the
+ * alias). A sentence-initial article is lower-cased: "The maid" → "the maid".
+ */
+export function outsiderDescription(r: Ref): string | null {
+  if (r.kind === 'outsider') return r.text;
+  if (r.kind !== 'desc') return null;
+  const words = r.text.split(/\s+/);
+  if (words.length < 2) return null;
+  const first = words[0].toLowerCase();
+  const head = words[words.length - 1].toLowerCase().replace(/['\u2019]s$/u, '');
+  if (!/^\p{L}[\p{L}'\u2019-]*$/u.test(words[words.length - 1]) || NOT_PERSONS.has(head)) return null;
+  if (POSSESSIVES.has(first)) {
+    if (RELATIONS.has(head)) return null;
+  } else if (!ARTICLES.has(first)) return null;
+  return [first, ...words.slice(1)].join(' ');
+}
+
+/** Head nouns that name a person. common practice, no source. */
+const PERSON_HEADS: ReadonlySet<string> = new Set([
+  'man', 'woman', 'men', 'women', 'boy', 'girl', 'lady', 'gentleman', 'child', 'lad', 'lass', 'fellow', 'chap', 'maid',
+  'wife', 'widow', 'servant', 'landlord', 'landlady', 'doctor', 'nurse', 'clerk', 'porter', 'guard', 'driver', 'soldier',
+  'sailor', 'officer', 'priest', 'vicar', 'parson', 'curate', 'farmer', 'keeper', 'miller', 'baker', 'butcher', 'smith',
+  'constable', 'innkeeper', 'neighbour', 'neighbor', 'cook', 'butler', 'housekeeper', 'governess', 'king', 'queen',
+  'prince', 'princess', 'duke', 'duchess', 'countess', 'baron', 'baroness', 'baby', 'youth', 'waiter', 'waitress',
+  'peddler', 'pedlar', 'beggar', 'shepherd', 'carter', 'carrier', 'groom', 'bride', 'judge', 'magistrate', 'sergeant',
+  'captain', 'mate', 'pilot', 'bargee', 'boatman', 'gardener', 'schoolmaster', 'schoolmistress', 'teacher', 'clergyman',
+  'pupil', 'student', 'customer', 'visitor', 'guest', 'host', 'hostess', 'messenger', 'tailor', 'grocer', 'shopkeeper',
+  'villager', 'passenger', 'traveller', 'traveler', 'labourer', 'laborer', 'workman', 'merchant', 'hawker', 'seller',
+]);
+
+/**
+ * Whether a description outside the cast names a person, for the narrative
+ * around the dialogue (in a tag every subject of a speech verb is taken for a
+ * person): a head noun from a short list of people or ending in one
+ * (fisherman, milkmaid, schoolgirl), or one the text itself uses as a speaker
+ * (`speaking`: heads of descriptions in the text's tags).
+ */
+export function namesPerson(description: string, speaking: ReadonlySet<string> = new Set()): boolean {
+  const head = description.split(/\s+/).at(-1)!.toLowerCase().replace(/['\u2019]s$/u, '');
+  if (PERSON_HEADS.has(head) || speaking.has(head)) return true;
+  return /(?:man|woman|men|women|maid|boy|girl|wife|lady)$/.test(head) && head.length > 4;
+}
+
+/** Person nouns that re-describe someone already met rather than name a role: "the old man", "the girl". common practice, no source. */
+const GENERIC_PERSONS: ReadonlySet<string> = new Set([
+  'man', 'woman', 'men', 'women', 'boy', 'girl', 'lady', 'gentleman', 'fellow', 'child', 'lad', 'lass', 'youth', 'chap',
+  'person', 'people', 'baby', 'infant', 'creature', 'soul', 'visitor', 'guest',
+]);
+
+/**
+ * Whether a description outside the cast may be an epithet for someone
+ * already on stage: a definite article before a generic person noun ("the
+ * old man", "the girl"), as narrators re-describe their characters. An
+ * indefinite description ("a boy", "an old woman") brings someone new in, and
+ * a role ("the maid", "the postman", "the second fisherman") names a person
+ * by what they do: those are not epithets.
+ */
+export function mayBeEpithet(description: string): boolean {
+  const words = description.toLowerCase().split(/\s+/);
+  return (words[0] === 'the' || words[0] === 'this' || words[0] === 'that') && GENERIC_PERSONS.has(words[words.length - 1]);
 }
 
 /** A run of capitalised words: an outsider's name, unless a cast mention starts inside it. */
@@ -204,6 +309,7 @@ export function sameReferent(a: Ref, b: Ref, genderOf: (member: number) => strin
 
 /** Whether a cast member with pronoun `own` can be referred to as `g`. */
 export function fitsGender(own: string | undefined, g: Gender): boolean {
+  if (g === 'i') return own === 'i'; // the first-person narrator
   if (g === 'he' || g === 'she') return own === undefined || own === g;
   if (g === 'they') return own === 'they';
   if (g === 'it') return own === 'it';

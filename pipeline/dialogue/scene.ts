@@ -7,10 +7,10 @@
  */
 
 import type { TextModel } from '../text/model.ts';
-import { fitsGender, isAdverb, NOT_NAMES, refAt, subjectStart, TITLES } from './refs.ts';
+import { fitsGender, isAdverb, mayBeEpithet, namesPerson, NOT_NAMES, outsiderDescription, refAt, subjectStart, TITLES } from './refs.ts';
 import { clauses } from './tags.ts';
 import { gapBetween, isCapitalised, narrativeTokens, surface, word, type TokenView } from './view.ts';
-import { verbLength, type VerbList } from './verbs.ts';
+import { looksPast, verbLength, type VerbList } from './verbs.ts';
 import type { Turn } from './turns.ts';
 
 export interface NarrativeMention {
@@ -23,6 +23,8 @@ export interface NarrativeMention {
   agent: boolean;
   /** Index of the mention's sentence within the paragraph. */
   sentence: number;
+  /** Someone outside the cast: how the text names or describes them ("Clem", "the maid"); null for a cast member. */
+  name: string | null;
 }
 
 export interface Scene {
@@ -35,8 +37,11 @@ export interface Scene {
   members(p: number, back: number, firstPara: number): number[];
 }
 
-export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList): Scene {
+/** `speaking`: head nouns of descriptions that speak in the text's tags ("said the porter"): people, whatever the noun. */
+export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList, speaking: ReadonlySet<string> = new Set()): Scene {
   const memo = new Map<number, NarrativeMention[]>();
+  // A first-person narrator (pronoun "i" in the cast as the rules see it) is on stage wherever "I" acts.
+  const narrator = v.cast.findIndex((c) => (c.pronoun as string | undefined) === 'i');
   const mentionsOf = (p: number): NarrativeMention[] => {
     const known = memo.get(p);
     if (known) return known;
@@ -57,12 +62,22 @@ export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList): Sce
         const len = verbLength(verbs, cl.map((t) => word(v, t)), k);
         if (len > 0) subj = refAt(v, cl, k + len, 'subject');
       }
-      if (subj?.kind === 'pronoun' && (subj.gender === 'he' || subj.gender === 'she' || subj.gender === 'they')) {
+      if (subj?.kind === 'pronoun' && subj.gender === 'i' && narrator >= 0) {
+        out.push({ token: cl[subj.first], member: narrator, subject: true, agent: true, sentence, name: null });
+      } else if (subj?.kind === 'pronoun' && (subj.gender === 'he' || subj.gender === 'she' || subj.gender === 'they')) {
         const g = subj.gender;
         const fits = (m: NarrativeMention): boolean => m.member >= 0 && fitsGender(v.cast[m.member].pronoun, g);
         let found: NarrativeMention | undefined = [...out].reverse().find(fits);
         for (let q = p - 1; !found && q >= Math.max(chapterStart, p - 2); q--) found = [...mentionsOf(q)].reverse().find(fits);
-        if (found) out.push({ token: cl[subj.first], member: found.member, subject: true, agent: true, sentence });
+        if (found) out.push({ token: cl[subj.first], member: found.member, subject: true, agent: true, sentence, name: null });
+      }
+      // Someone outside the cast as the clause's subject: "The maid put her head in at the door."
+      const described = subj ? outsiderDescription(subj) : null;
+      const person = described !== null && (subj!.kind === 'outsider' || (namesPerson(described, speaking) && !mayBeEpithet(described)));
+      let outsiderToken = -1;
+      if (person && subj && (subj.kind === 'outsider' ? pastVerbFollows(v, cl, subj.next) : pastVerbWithin(v, cl, subj.next, 12))) {
+        outsiderToken = cl[subj.first];
+        out.push({ token: outsiderToken, member: -1, subject: true, agent: true, sentence, name: described });
       }
       for (let j = 0; j < cl.length; j++) {
         const t = cl[j];
@@ -71,10 +86,10 @@ export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList): Sce
           const end = j + v.mentionLength[t];
           const possessive = /['\u2019]s$/u.test(surface(v, cl[Math.min(cl.length - 1, end - 1)]));
           const subject = subj !== null && subj.kind === 'cast' && cl[subj.first] === t;
-          out.push({ token: t, member: m, subject, agent: !possessive && (subject || verbFollows(v, cl, end)), sentence });
+          out.push({ token: t, member: m, subject, agent: !possessive && (subject || verbFollows(v, cl, end)), sentence, name: null });
           j = end - 1;
-        } else if (j > 0 && isCapitalised(v, t) && !NOT_NAMES.has(word(v, t)) && !TITLES.has(word(v, t)) && v.ambiguous.get(t) === undefined && pastVerbFollows(v, cl, j + 1)) {
-          out.push({ token: t, member: -1, subject: false, agent: true, sentence });
+        } else if (j > 0 && t !== outsiderToken && isCapitalised(v, t) && !NOT_NAMES.has(word(v, t)) && !TITLES.has(word(v, t)) && v.ambiguous.get(t) === undefined && pastVerbFollows(v, cl, j + 1)) {
+          out.push({ token: t, member: -1, subject: j === k, agent: true, sentence, name: surface(v, t) });
         }
       }
     }
@@ -112,21 +127,18 @@ function verbFollows(v: TokenView, cl: readonly number[], k: number): boolean {
   return !isCapitalised(v, cl[j]) && !NOT_VERBS.has(word(v, cl[j])) && !/^\p{N}/u.test(word(v, cl[j]));
 }
 
-/** Common irregular past forms of verbs of action and being. common practice, no source. */
-const IRREGULAR_PASTS: ReadonlySet<string> = new Set([
-  'was', 'had', 'came', 'went', 'stood', 'sat', 'saw', 'took', 'ran', 'held', 'put', 'got', 'gave', 'made', 'knew',
-  'thought', 'felt', 'left', 'brought', 'began', 'kept', 'found', 'drew', 'threw', 'rode', 'drove', 'wore', 'shook',
-  'spoke', 'said', 'told', 'lay', 'rose', 'fell', 'struck', 'caught', 'bent', 'swung', 'hung', 'led', 'set', 'let',
-  'could', 'would', 'did', 'stepped', 'came',
-]);
+/** Whether a past-tense verb stands within `n` words from clause position k ("A stout woman at my elbow turned…"). */
+function pastVerbWithin(v: TokenView, cl: readonly number[], k: number, n: number): boolean {
+  for (let j = k; j < Math.min(cl.length, k + n); j++) if (looksPast(word(v, cl[j]))) return true;
+  return false;
+}
 
 /** Whether a past-tense verb (a regular -ed form or a common irregular one) follows a name outside the cast. */
 function pastVerbFollows(v: TokenView, cl: readonly number[], k: number): boolean {
   if (!verbFollows(v, cl, k)) return false;
   const w = word(v, cl[k]);
   const w2 = k + 1 < cl.length ? word(v, cl[k + 1]) : '';
-  const past = (x: string): boolean => (x.length > 3 && x.endsWith('ed')) || IRREGULAR_PASTS.has(x);
-  return past(w) || (isAdverb(v, cl[k]) && past(w2));
+  return looksPast(w) || (isAdverb(v, cl[k]) && looksPast(w2));
 }
 
 /**

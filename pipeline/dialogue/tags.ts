@@ -248,31 +248,50 @@ export function findBeats(v: TokenView, stretchesOfTurn: readonly Stretch[], anc
 
 const VOCATIVE_LEADS: ReadonlySet<string> = new Set(['my', 'dear', 'o', 'oh', 'ah', 'poor', 'good', 'old', 'little', 'darling', 'sweet', 'young']);
 
+/** Opening marks of quotations within speech, and the marks that close each. common practice, no source. */
+const INNER: ReadonlyMap<number, readonly number[]> = new Map([
+  [0x201c, [0x201d]], // “…”
+  [0x22, [0x22]], // "…"
+  [0x201e, [0x201c, 0x201d]], // „…“ „…”
+  [0xab, [0xbb]], // «…»
+  [0x2039, [0x203a]], // ‹…›
+  [0x201a, [0x2018, 0x2019]], // ‚…‘
+]);
+
 /**
  * Ranges of quotation q that are quotations within the speech (‘…’ inside
- * “…”, or “…” inside ‘…’): words someone else said or wrote.
+ * “…”, “…” inside ‘…’, and any other marks inside guillemets, low-high marks
+ * or dash speech): words someone else said or wrote.
  */
-export function nestedRanges(text: string, q: Quote, convention: 'double' | 'single'): [number, number][] {
+export function nestedRanges(text: string, q: Quote): [number, number][] {
   const out: [number, number][] = [];
   let open = -1;
+  let closers: readonly number[] = [];
+  const singles = q.marks !== 'single';
   for (let i = q.start; i < q.end; i++) {
     const c = text.charCodeAt(i);
     const prevLetter = i > q.start && /[\p{L}\p{N}]/u.test(text[i - 1]);
     const nextLetter = i + 1 < q.end && /[\p{L}\p{N}]/u.test(text[i + 1]);
-    if (convention === 'double') {
-      if (c !== 0x2018 && c !== 0x2019 && c !== 0x27) continue;
-      if (open < 0 && c !== 0x2019 && !prevLetter && (nextLetter || /[\u2014\u2026]/.test(text[i + 1] ?? ' '))) {
-        if (!LEADING_ELISIONS.has(wordStartingAt(text, i + 1, q.end))) open = i;
-      }
-      else if (open >= 0 && c !== 0x2018 && !nextLetter && i > q.start && !/\s/.test(text[i - 1])) {
+    if (open >= 0) {
+      if (closers.includes(c) && (c !== 0x2019 || (!nextLetter && i > q.start && !/\s/.test(text[i - 1])))) {
         out.push([open, i + 1]);
         open = -1;
       }
-    } else if (c === 0x201c || (c === 0x22 && open < 0)) {
+      continue;
+    }
+    if (singles && (c === 0x2018 || c === 0x27)) {
+      // A single mark opens at a word's start, not before an elided word ('tis, ’em).
+      if (!prevLetter && (nextLetter || /[\u2014\u2026]/.test(text[i + 1] ?? ' ')) && !LEADING_ELISIONS.has(wordStartingAt(text, i + 1, q.end))) {
+        open = i;
+        closers = c === 0x27 ? [0x27] : [0x2019];
+      }
+      continue;
+    }
+    if (q.marks === 'double' || (q.marks === 'low' && c === 0x201e) || (q.marks === 'guillemets' && (c === 0xab || c === 0xbb))) continue;
+    const cl = INNER.get(c);
+    if (cl && !/\s/.test(text[i + 1] ?? ' ')) {
       open = i;
-    } else if ((c === 0x201d || c === 0x22) && open >= 0) {
-      out.push([open, i + 1]);
-      open = -1;
+      closers = cl;
     }
   }
   if (open >= 0) out.push([open, q.end]);
@@ -280,12 +299,12 @@ export function nestedRanges(text: string, q: Quote, convention: 'double' | 'sin
 }
 
 /** Cast members addressed by name inside quotation q (vocatives), in order; names inside quotations within it are left out. */
-export function findVocatives(v: TokenView, q: Quote, convention: 'double' | 'single' = 'double'): number[] {
+export function findVocatives(v: TokenView, q: Quote): number[] {
   const { tokens } = v.model;
   const p = q.paragraph;
   const first = firstTokenAtOrAfter(v.model, q.start, v.paraFirst[p], v.paraEnd[p]);
   const out: number[] = [];
-  const nested = nestedRanges(v.text, q, convention);
+  const nested = nestedRanges(v.text, q);
   let end = first;
   while (end < v.paraEnd[p] && tokens.start[end] < q.end) end++;
   for (let t = first; t < end; t++) {
@@ -331,4 +350,39 @@ export function findSelfName(v: TokenView, q: Quote): number | null {
     }
   }
   return null;
+}
+
+/**
+ * A cast member whose name opens quotation q and is set off by punctuation
+ * or ends it ("Lucy Venn, ma'am.", "Hollis Fenn."): the speaker introducing
+ * themselves, when the turn before asked who they are (see asksWho). Null
+ * when the quotation does not open with a cast mention.
+ */
+export function findIntroduction(v: TokenView, q: Quote): number | null {
+  const { tokens } = v.model;
+  const p = q.paragraph;
+  const t = firstTokenAtOrAfter(v.model, q.start, v.paraFirst[p], v.paraEnd[p]);
+  if (t >= v.paraEnd[p] || tokens.start[t] >= q.end || /[\p{L}\p{N}]/u.test(v.text.slice(q.start, tokens.start[t]))) return null;
+  const m = v.mention[t];
+  if (m < 0) return null;
+  const last = t + v.mentionLength[t] - 1;
+  if (/['\u2019]s$/u.test(surface(v, last))) return null;
+  const after = v.text.slice(tokens.end[last], q.end);
+  return after === '' || /^\s*[,.;!\u2014\u2013\u2026]/.test(after) ? m : null;
+}
+
+/**
+ * Whether a speech asks who the person spoken to is: "Who are you?", "And
+ * who might you be?", "What's your name?", "Who's there?", "What do they
+ * call you?". common practice, no source.
+ */
+export function asksWho(s: string): boolean {
+  const t = s.toLowerCase().replace(/\u2019/g, "'");
+  if (!t.includes('?')) return false;
+  return (
+    /\bwho\b[^?.!]*\b(?:you|ye|thou)\b/.test(t) ||
+    /\byour name\b/.test(t) ||
+    /\bwho(?:'s| is) (?:there|that|this|it)\b/.test(t) ||
+    /\bwhat[^?.!]*\bcall(?:ed)? you\b/.test(t)
+  );
 }

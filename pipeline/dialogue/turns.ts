@@ -9,7 +9,7 @@ import type { Quote } from './quotes.ts';
 import type { VerbList } from './verbs.ts';
 import type { Gender } from './refs.ts';
 import { sameReferent } from './refs.ts';
-import { findBeats, findSelfName, findTag, findVocatives, stretches, type Beat, type Stretch, type Tag } from './tags.ts';
+import { findBeats, findIntroduction, findSelfName, findTag, findVocatives, stretches, type Beat, type Stretch, type Tag } from './tags.ts';
 import type { TokenView } from './view.ts';
 
 export type Rule = 'pin' | 'tag' | 'outsider' | 'tag-pronoun' | 'beat' | 'self-naming' | 'alternation' | 'vocative' | 'scene' | 'none' | 'text';
@@ -40,8 +40,12 @@ export interface Turn {
   conf: number;
   /** Settled by a pin, a tag, a beat or a resolved pronoun: a known speaker that sequence rules start from. */
   fixed: boolean;
-  /** The speaker is named but outside the cast. */
+  /** The speaker is outside the cast (named, described, or pinned as nobody in the cast). */
   outsider: boolean;
+  /** How the text names or describes the speaker outside the cast ("the maid"), when it does. */
+  outsiderName: string | null;
+  /** A cast member the turn opens by naming, as a reply to "Who are you?" would ("Lucy Venn, ma'am."). */
+  introduces: number | null;
   /** Who the speaker may be, from an ambiguous tag or beat. */
   candidates: number[] | null;
   /** The pronoun of a tag or beat that could not be resolved on its own. */
@@ -60,15 +64,15 @@ export interface Turn {
 function newTurn(q: Quote): Turn {
   return {
     quotes: [], chapter: q.chapter, firstPara: q.paragraph, lastPara: q.paragraph, tag: null, stretches: [], vocatives: [], selfNamed: null,
-    beats: [], pure: false, anchorOffset: q.open, speaker: null, rule: 'none', conf: 0, fixed: false, outsider: false, candidates: null,
+    beats: [], pure: false, anchorOffset: q.open, speaker: null, rule: 'none', conf: 0, fixed: false, outsider: false, outsiderName: null, introduces: null, candidates: null,
     gender: null, pronoun: null, pinAddressee: undefined, explicitTo: null, described: false, resumes: false,
   };
 }
 
 /** Group the speech quotations into turns and gather their evidence. */
-export function buildTurns(v: TokenView, quotes: readonly Quote[], verbs: VerbList, convention: 'double' | 'single', genderOf: (m: number) => string | undefined): Turn[] {
+export function buildTurns(v: TokenView, quotes: readonly Quote[], verbs: VerbList, genderOf: (m: number) => string | undefined): Turn[] {
   const speech = quotes.filter((q) => q.kind === 'speech');
-  const ev = new Map<number, { tag: Tag | null; before: Stretch; after: Stretch | null; vocatives: number[]; self: number | null }>();
+  const ev = new Map<number, { tag: Tag | null; before: Stretch; after: Stretch | null; vocatives: number[]; self: number | null; intro: number | null }>();
   speech.forEach((q, k) => {
     const prev = k > 0 && speech[k - 1].paragraph === q.paragraph ? speech[k - 1] : null;
     const next = k + 1 < speech.length && speech[k + 1].paragraph === q.paragraph ? speech[k + 1] : null;
@@ -77,8 +81,9 @@ export function buildTurns(v: TokenView, quotes: readonly Quote[], verbs: VerbLi
       tag: findTag(v, verbs, s.before, s.after),
       before: s.before,
       after: s.after,
-      vocatives: findVocatives(v, q, convention),
+      vocatives: findVocatives(v, q),
       self: findSelfName(v, q),
+      intro: findIntroduction(v, q),
     });
   });
 
@@ -97,6 +102,7 @@ export function buildTurns(v: TokenView, quotes: readonly Quote[], verbs: VerbLi
       cur = newTurn(q);
       turns.push(cur);
       cur.stretches.push(e.before);
+      cur.introduces = e.intro;
     } else if (!cur.stretches.some((s) => s.start === e.before.start)) {
       cur.stretches.push(e.before);
     }

@@ -113,3 +113,16 @@ export function verbLength(verbs: VerbList, words: readonly string[], k: number)
   if (particles && words[k + 1] !== undefined && particles.has(words[k + 1])) return 2;
   return verbs.single.has(w) ? 1 : 0;
 }
+
+/** Common irregular past forms of verbs of action and being. common practice, no source. */
+export const IRREGULAR_PASTS: ReadonlySet<string> = new Set([
+  'was', 'had', 'came', 'went', 'stood', 'sat', 'saw', 'took', 'ran', 'held', 'put', 'got', 'gave', 'made', 'knew',
+  'thought', 'felt', 'left', 'brought', 'began', 'kept', 'found', 'drew', 'threw', 'rode', 'drove', 'wore', 'shook',
+  'spoke', 'said', 'told', 'lay', 'rose', 'fell', 'struck', 'caught', 'bent', 'swung', 'hung', 'led', 'set', 'let',
+  'could', 'would', 'did', 'stepped',
+]);
+
+/** Whether a lower-case word looks like a past-tense verb: a regular -ed form or a common irregular one. */
+export function looksPast(w: string): boolean {
+  return (w.length > 3 && w.endsWith('ed')) || IRREGULAR_PASTS.has(w);
+}

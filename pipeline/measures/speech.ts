@@ -4,6 +4,7 @@ import type { BarsData, LinesData } from '../charts/types.ts';
 import { chapterTick } from '../text/labels.ts';
 import { analyseDialogue, MIN_CONFIDENCE, type Rule } from '../dialogue/attribute.ts';
 import type { QuoteProblem } from '../dialogue/quotes.ts';
+import type { Convention } from '../dialogue/conventions.ts';
 
 export const speechParams = z
   .object({
@@ -56,7 +57,7 @@ export interface SpeakerCounts {
 }
 
 export interface SpeechResult {
-  convention: 'double' | 'single';
+  convention: Convention;
   quotes: SpeechQuote[];
   /** Quotations left out of `quotes` by `maxQuotes` or `includeText`. */
   omitted: number;

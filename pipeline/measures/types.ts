@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import type { CastMember, Mentions, TextModel } from '../text/model.ts';
 import type { ChartData, Table } from '../charts/types.ts';
+import type { MarksPlan } from '../dialogue/conventions.ts';
 
 /** A measure's method card: shown on its panel pages and on the methods page. */
 export interface MethodCard {
@@ -29,6 +30,10 @@ export interface DialogueSettings {
   verbs: string[];
   /** Curator corrections: the quotation in `chapter` (1-based) whose words start with `startsWith`. */
   pins: { chapter: number; startsWith: string; speaker: string | null; addressee?: string | null }[];
+  /** The marks that set off speech: one convention for the text, or a default and chapters that differ. Default: read from the text. */
+  marks?: MarksPlan;
+  /** Cast id of a first-person narrator: "I said" in the narrative is theirs. Default: none. */
+  narrator?: string | null;
 }
 
 /** Everything a measure may read. Built once per text and shared by its panels. */

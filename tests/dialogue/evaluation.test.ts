@@ -47,9 +47,11 @@ describe('the scorer', () => {
     // Four gold rows with a cast speaker: two right (1, 3), one wrong (2), one not found (5, counted as null).
     expect(f.speakers).toEqual({ total: 4, correct: 2, accuracy: 0.5, nulls: 1, nullRate: 0.25 });
     expect(f.missed.map((m) => m.n)).toEqual([5]);
-    expect(f.outsiders).toEqual({ total: 1, nulls: 1 });
-    expect(f.perRule.tag).toEqual({ total: 2, correct: 1, accuracy: 0.5 });
-    expect(f.perRule.missed).toEqual({ total: 1, correct: 0, accuracy: 0 });
+    expect(f.outsiders).toEqual({ total: 1, nulls: 1, givenBy: {} });
+    // Row 1 right, row 2 given to the wrong member; both tagged. Addressees: row 1's gold osric, row 2's gold ada.
+    expect(f.perRule.tag).toMatchObject({ total: 2, correct: 1, accuracy: 0.5, wrong: 1, nulls: 0 });
+    expect(f.perRule.tag.addressees.total).toBe(2);
+    expect(f.perRule.missed).toMatchObject({ total: 1, correct: 0, accuracy: 0, wrong: 0, nulls: 1 });
     expect(f.addressees.total).toBe(3);
   });
 

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { buildTextModel } from '../../pipeline/text/build.ts';
 import { findQuotes } from '../../pipeline/dialogue/quotes.ts';
-import { detectConvention } from '../../pipeline/dialogue/marks.ts';
+import { readConventions } from '../../pipeline/dialogue/conventions.ts';
 import { letterShaped } from '../../pipeline/dialogue/kind.ts';
 
 const scan = (text: string) => findQuotes(buildTextModel(text, { id: 'quotes-test' }));
@@ -69,12 +69,10 @@ describe('quotation finder: marks and conventions', () => {
   });
 
   it('detects the convention from how paragraphs open, and from opening marks elsewhere', () => {
-    const model = (t: string) => buildTextModel(t, { id: 'c' });
-    expect(detectConvention(model('‘Go,’ she said.\n\n‘Now.’').text, model('‘Go,’ she said.\n\n‘Now.’').paragraphs)).toBe('single');
-    const m = model('She said “go” and he said ‘now’ and “later”.');
-    expect(detectConvention(m.text, m.paragraphs)).toBe('double');
-    const e = model('’Tis late. “Go,” she said.');
-    expect(detectConvention(e.text, e.paragraphs)).toBe('double');
+    const conv = (t: string) => readConventions(buildTextModel(t, { id: 'c' })).text;
+    expect(conv('‘Go,’ she said.\n\n‘Now.’')).toBe('single');
+    expect(conv('She said “go” and he said ‘now’ and “later”.')).toBe('double');
+    expect(conv('’Tis late. “Go,” she said.')).toBe('double');
   });
 });
 
