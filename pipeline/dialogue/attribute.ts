@@ -188,8 +188,11 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
     }
     // A reply that gives a name to "Who are you?" is that person's: "Lucy Venn, ma'am."
     const prev = turns[i - 1];
-    if (t.introduces !== null && adjacent(prev, t) && asksWho(prev.quotes.map((qi) => quotes[qi].text).join(' ')) && allowed(cast, t, t.introduces)) {
-      settle(t, t.introduces, 'self-naming', 0.85);
+    if (t.introduces !== null && adjacent(prev, t) && asksWho(prev.quotes.map((qi) => quotes[qi].text).join(' '))) {
+      // The name is given, not called out: it is no vocative.
+      const m = t.introduces;
+      t.vocatives = t.vocatives.filter((x) => x !== m);
+      settle(t, m, 'self-naming', 0.85);
       return;
     }
     if (r) return;
@@ -234,7 +237,7 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
   let changed = false;
   turns.forEach((t, i) => {
     if (t.fixed || !t.pronoun) return;
-    if (t.speaker !== null && allowed(cast, t, t.speaker)) return; // the exchange settled it
+    if (t.speaker !== null && t.speaker < cast.length && allowed(cast, t, t.speaker)) return; // the exchange settled it
     const expected = t.speaker;
     const res = resolvePronoun(pctx, i, t.pronoun.gender, t.pronoun.token, { expected, continuing: t.pronoun.continuing });
     if (res && res.member >= 0 && res.conf >= MIN_CONFIDENCE && allowed(cast, t, res.member)) {

@@ -11,9 +11,10 @@
  * anchor (the earlier one on a tie), with a lower confidence. Turns before the
  * first anchor and after the last follow that anchor's parity.
  *
- * A known speaker who addresses someone by name or by tag ("You've no fire,
- * Miss Quarry") is answered by them: the next turn, if unknown, is theirs
- * (0.8), and counts as an anchor.
+ * A speaker who addresses someone by name or by tag ("You've no fire, Miss
+ * Quarry") is answered by them: the next turn, if unknown, is theirs (0.8),
+ * and counts as an anchor; when the speaker is not known, only a name that
+ * opens the speech counts as the call ("Tomas, take the bag up.").
  *
  * The other side of X's exchange is, in order: the speaker of the nearest turn
  * of the run spoken by someone else (anchors, and turns already filled to the
@@ -174,9 +175,12 @@ export function fillRun(ctx: ChainContext, run: readonly number[]): void {
   // A known speaker who addresses someone by name or tag is answered by them in the next turn.
   const replies = new Map<number, number>();
   for (let k = 0; k + 1 < n; k++) {
-    const s = fixedSpeaker(k);
-    if (s === null || fixedSpeaker(k + 1) !== null) continue;
-    const to = addressed(k, s);
+    if (fixedSpeaker(k + 1) !== null) continue;
+    // The person addressed answers; when the speaker is unknown, only a call that opens the speech counts
+    // ("Tomas, take the bag up." — "Which room?"), not a name in passing ("Dunmore, his name is.").
+    const known = fixedSpeaker(k);
+    const s = known ?? -1;
+    const to = known !== null ? addressed(k, s) : (slots[k].map((ti) => T[ti]).find((u) => u.introduces !== null && u.vocatives.includes(u.introduces))?.introduces ?? null);
     if (to !== null && fits(k + 1, to)) replies.set(k + 1, to);
   }
   const speakerOf = (k: number): number | null => fixedSpeaker(k) ?? replies.get(k) ?? null;
@@ -197,7 +201,9 @@ export function fillRun(ctx: ChainContext, run: readonly number[]): void {
     }
     const first = T[run[0]];
     const last = T[run[run.length - 1]];
-    const weak = [...ctx.scene.members(last.lastPara, last.lastPara - first.firstPara + 3, ctx.chapterStart(first.chapter)), ...recent];
+    // On stage: the narrative's subjects, then whoever spoke lately, then others named in the narrative.
+    const around = [last.lastPara, last.lastPara - first.firstPara + 3, ctx.chapterStart(first.chapter)] as const;
+    const weak = [...ctx.scene.members(...around, true), ...recent, ...ctx.scene.members(...around)];
     const prior = frequentSpeakers(T, run[0]);
     const ok = (m: number): boolean => m !== s && !exclude.includes(m);
     // Someone who speaks in the run: the first who fits the nearest turn to fill (a clash further on ends the alternation there).

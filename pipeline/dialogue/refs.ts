@@ -55,7 +55,7 @@ export const NOT_NAMES: ReadonlySet<string> = new Set([
   'across', 'down', 'up', 'over', 'under', 'through', 'from', 'to', 'by', 'of', 'once', 'twice', 'later', 'soon',
   'never', 'always', 'sometimes', 'none', 'neither', 'either', 'nothing', 'silence', 'somewhere', 'presently',
   'afterwards', 'long', 'at', 'without', 'though', 'although', 'because', 'since', 'until', 'unless', 'some',
-  'many', 'most', 'several', 'few', 'another', 'other', 'such', 'any', 'every', 'half',
+  'many', 'most', 'several', 'few', 'another', 'other', 'such', 'any', 'every', 'half', 'i',
 ]);
 
 /** Words that may stand between a subject and its verb, or before a clause's subject. common practice, no source. */

@@ -2,8 +2,10 @@
  * Who is on stage: cast members named in the narrative (outside quotations),
  * paragraph by paragraph, with the clause subjects marked. A clause whose
  * subject is a pronoun counts as a mention of the latest compatible cast
- * member named before it (within the paragraph and the two before it), so
- * that "He had his ledger open" keeps the factor on stage.
+ * member named before it as a subject (else named at all), within the
+ * paragraph and the two before it, so that "He had his ledger open" keeps
+ * the factor on stage. A possessive ("Marta's husband") does not put anyone
+ * on stage.
  */
 
 import type { TextModel } from '../text/model.ts';
@@ -25,6 +27,8 @@ export interface NarrativeMention {
   sentence: number;
   /** Someone outside the cast: how the text names or describes them ("Clem", "the maid"); null for a cast member. */
   name: string | null;
+  /** A possessive ("Marta's husband"): the person is spoken of, not on stage. */
+  possessive?: boolean;
 }
 
 export interface Scene {
@@ -32,9 +36,10 @@ export interface Scene {
   mentionsOf(p: number): NarrativeMention[];
   /**
    * Cast members on stage in paragraphs p, p−1, … p−back (not before
-   * `firstPara`): clause subjects first, then other mentions, each latest first.
+   * `firstPara`): clause subjects first, then other mentions (not
+   * possessives), each latest first. With `subjectsOnly`, the subjects alone.
    */
-  members(p: number, back: number, firstPara: number): number[];
+  members(p: number, back: number, firstPara: number, subjectsOnly?: boolean): number[];
 }
 
 /** `speaking`: head nouns of descriptions that speak in the text's tags ("said the porter"): people, whatever the noun. */
@@ -67,8 +72,10 @@ export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList, spea
       } else if (subj?.kind === 'pronoun' && (subj.gender === 'he' || subj.gender === 'she' || subj.gender === 'they')) {
         const g = subj.gender;
         const fits = (m: NarrativeMention): boolean => m.member >= 0 && fitsGender(v.cast[m.member].pronoun, g);
-        let found: NarrativeMention | undefined = [...out].reverse().find(fits);
-        for (let q = p - 1; !found && q >= Math.max(chapterStart, p - 2); q--) found = [...mentionsOf(q)].reverse().find(fits);
+        // The latest fitting subject first (a pronoun keeps to the subject of the clauses before it), then any fitting mention.
+        const latest = (l: readonly NarrativeMention[], subject: boolean): NarrativeMention | undefined => [...l].reverse().find((m) => fits(m) && (!subject || m.subject));
+        let found: NarrativeMention | undefined = latest(out, true) ?? latest(out, false);
+        for (let q = p - 1; !found && q >= Math.max(chapterStart, p - 2); q--) found = latest(mentionsOf(q), true) ?? latest(mentionsOf(q), false);
         if (found) out.push({ token: cl[subj.first], member: found.member, subject: true, agent: true, sentence, name: null });
       }
       // Someone outside the cast as the clause's subject: "The maid put her head in at the door."
@@ -86,32 +93,35 @@ export function sceneIndex(v: TokenView, model: TextModel, verbs: VerbList, spea
           const end = j + v.mentionLength[t];
           const possessive = /['\u2019]s$/u.test(surface(v, cl[Math.min(cl.length - 1, end - 1)]));
           const subject = subj !== null && subj.kind === 'cast' && cl[subj.first] === t;
-          out.push({ token: t, member: m, subject, agent: !possessive && (subject || verbFollows(v, cl, end)), sentence, name: null });
+          out.push({ token: t, member: m, subject, agent: !possessive && (subject || verbFollows(v, cl, end)), sentence, name: null, possessive });
           j = end - 1;
-        } else if (j > 0 && t !== outsiderToken && isCapitalised(v, t) && !NOT_NAMES.has(word(v, t)) && !TITLES.has(word(v, t)) && v.ambiguous.get(t) === undefined && pastVerbFollows(v, cl, j + 1)) {
+        } else if (j > 0 && t !== outsiderToken && !ARTICLES_BEFORE_NAMES.has(word(v, cl[j - 1])) && isCapitalised(v, t) && !NOT_NAMES.has(word(v, t)) && !TITLES.has(word(v, t)) && v.ambiguous.get(t) === undefined && pastVerbFollows(v, cl, j + 1)) {
           out.push({ token: t, member: -1, subject: j === k, agent: true, sentence, name: surface(v, t) });
         }
       }
     }
     return out;
   };
-  const members = (p: number, back: number, firstPara: number): number[] => {
+  const members = (p: number, back: number, firstPara: number, subjectsOnly = false): number[] => {
     const subjects: number[] = [];
     const others: number[] = [];
     for (let q = p; q >= Math.max(firstPara, p - back); q--) {
       const l = mentionsOf(q);
       for (let k = l.length - 1; k >= 0; k--) {
         const m = l[k];
-        if (m.member < 0) continue;
+        if (m.member < 0 || m.possessive) continue;
         if (m.subject) {
           if (!subjects.includes(m.member)) subjects.push(m.member);
         } else if (!others.includes(m.member)) others.push(m.member);
       }
     }
-    return [...subjects, ...others.filter((m) => !subjects.includes(m))];
+    return subjectsOnly ? subjects : [...subjects, ...others.filter((m) => !subjects.includes(m))];
   };
   return { mentionsOf, members };
 }
+
+/** Words before a capitalised word that make it no person's name: "the Juliane", "a Coker". common practice, no source. */
+const ARTICLES_BEFORE_NAMES: ReadonlySet<string> = new Set(['the', 'a', 'an', 'this', 'that', 'every', 'each', 'no']);
 
 /** Words that cannot follow a subject as its verb. common practice, no source. */
 const NOT_VERBS: ReadonlySet<string> = new Set([

@@ -44,7 +44,7 @@ export interface Turn {
   outsider: boolean;
   /** How the text names or describes the speaker outside the cast ("the maid"), when it does. */
   outsiderName: string | null;
-  /** A cast member the turn opens by naming, as a reply to "Who are you?" would ("Lucy Venn, ma'am."). */
+  /** A cast member the turn opens by naming, as a reply to "Who are you?" would ("Lucy Venn, ma'am."), or as a call ("Tomas, take the bag up."). */
   introduces: number | null;
   /** Who the speaker may be, from an ambiguous tag or beat. */
   candidates: number[] | null;
