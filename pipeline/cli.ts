@@ -14,6 +14,7 @@ import { parseArgs } from 'node:util';
 import { existsSync, rmSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { describeChapterMarks } from './dialogue/report.ts';
 import { prepareExhibit, GENERATOR } from './exhibit.ts';
 import type { PrepareResult } from './exhibit.ts';
 import { formatProblem, hasErrors, problem, sortProblems, wording } from './problems/problem.ts';
@@ -205,6 +206,8 @@ function printTextSummary(t: PrepareResult['texts'][number], io: Io): void {
     const at = c.line > 0 && t.headings.taken.length > 0 ? `, line ${c.line}` : '';
     const indent = partLines.size > 0 && c.part ? '    ' : '  ';
     io.out(`${indent}${String(c.number).padStart(3)}. ${c.title}${at}  (${c.words.toLocaleString('en-GB')} words)\n`);
+    const marks = t.dialogue.chapters.find((m) => m.chapter === c.number);
+    if (marks) for (const line of describeChapterMarks(marks)) io.out(`${indent}       ${line}\n`);
   }
   if (t.headings.rejected.length) {
     const shown = t.headings.rejected.slice(0, NEAR_MISSES_SHOWN);
@@ -216,6 +219,11 @@ function printTextSummary(t: PrepareResult['texts'][number], io: Io): void {
   if (t.cast.length) {
     io.out('  Cast mentions:\n');
     for (const c of [...t.cast].sort((a, b) => b.mentions - a.mentions)) io.out(`    ${c.name} (${c.id}): ${c.mentions}\n`);
+  }
+  if (t.dialogue.outsiders.length) {
+    const top = t.dialogue.outsiders.slice(0, 10);
+    io.out('  Speakers outside the cast (their speech has no speaker; add them to the cast to count it):\n');
+    io.out(`    ${top.map((o) => `${o.name} ×${o.turns}`).join(', ')}${t.dialogue.outsiders.length > top.length ? `, and ${t.dialogue.outsiders.length - top.length} more` : ''}\n`);
   }
   if (t.ambiguous.length) {
     const byText = new Map<string, { candidates: string[]; chapters: Set<number>; n: number }>();

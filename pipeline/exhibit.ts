@@ -25,7 +25,7 @@ import { measures } from './measures/registry.ts';
 import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
 import { readLexicons } from './stages/read-lexicons.ts';
 import { checkPins } from './dialogue/pins.ts';
-import { findQuotes } from './dialogue/quotes.ts';
+import { dialogueReport, type DialogueReport } from './dialogue/report.ts';
 import { charts } from './charts/index.ts';
 import { drawPanel } from './stages/notes.ts';
 import { cacheKey, ResultCache } from './cache/cache.ts';
@@ -102,6 +102,8 @@ export interface TextSummary {
   outside: { from: number; to: number }[];
   cast: { id: string; name: string; mentions: number }[];
   ambiguous: { text: string; chapter: number; candidates: string[] }[];
+  /** The speech marks read per chapter, and the speakers outside the cast heard most often. */
+  dialogue: Pick<DialogueReport, 'chapters' | 'outsiders'>;
   warnings: Problem[];
 }
 
@@ -178,6 +180,22 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
       if (typeof named === 'string' && !lexicons[named] && !jobs.lexicons.some((l) => l.id === named)) {
         problems.push(atWhere({ ...p.where, path: `${p.where.path}.params.lexicon` }, 'plan/unknown-lexicon', { name: named, ids: jobs.lexicons.map((l) => l.id) }));
       }
+    }
+  }
+  // Chapters named in dialogue.marks that the text does not have would silently set nothing.
+  for (const s of states.values()) {
+    const marks = s.job.dialogue.marks;
+    if (marks === undefined || typeof marks === 'string') continue;
+    const count = s.structure.chapters.length;
+    for (const key of Object.keys(marks.chapters ?? {})) {
+      if (Number(key) <= count) continue;
+      problems.push(
+        atWhere(
+          { ...s.job.where, path: `${s.job.where.path}.dialogue.marks.chapters["${key}"]` },
+          'dialogue/marks-chapter',
+          { chapter: key, text: s.job.display, count },
+        ),
+      );
     }
   }
   // Curator pins that match no quotation would silently correct nothing.
@@ -385,6 +403,7 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
   const { model, mentions } = s.read.open();
   const counts = new Array<number>(cast.length).fill(0);
   for (let k = 0; k < mentions.count; k++) counts[mentions.member[k]!]!++;
+  const dialogue = dialogueReport(model, cast, mentions, s.job.dialogue);
   return {
     id: s.job.id,
     source: s.job.display,
@@ -395,14 +414,14 @@ function summarise(s: TextState, cast: CastMember[]): TextSummary {
     outside: (model.skipped ?? []).map((r) => ({ from: r.line, to: model.position(Math.max(r.start, r.end - 1)).line })),
     cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
     ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
+    dialogue: { chapters: dialogue.chapters, outsiders: dialogue.outsiders },
     // The text model's own warnings are reported with the reading (stage 2), cache or no cache.
     warnings: [
-      // Unbalanced quotation marks: the rest of the text is still read.
-      ...(cast.length
-        ? findQuotes(model, s.job.dialogue.verbs).problems.map((q) =>
-            problem('dialogue/unbalanced', { chapter: q.chapter, paragraph: q.paragraph, detail: q.message }, { file: s.job.display, line: q.line }),
-          )
-        : []),
+      // Unbalanced quotation marks, and marks with no speech found: the rest of the text is still read.
+      // Only where dialogue is read at all (the speech measures need a cast).
+      ...(cast.length ? dialogue.warnings : []).map((q) =>
+        problem(q.code, { chapter: q.chapter, paragraph: q.paragraph, detail: q.message }, { file: s.job.display, line: q.line }),
+      ),
     ],
   };
 }

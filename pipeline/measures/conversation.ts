@@ -3,8 +3,10 @@ import type { Measure } from './types.ts';
 import type { BarsData, MatrixData } from '../charts/types.ts';
 import { analyseDialogue, MIN_CONFIDENCE } from '../dialogue/attribute.ts';
 
-/** Row and column id standing for a speaker or addressee who is not known (or outside the cast). */
+/** Row and column id standing for a speaker or addressee who is not known. */
 export const UNKNOWN_ID = '(unknown)';
+/** Row id standing for speakers outside the cast (a tag such as "said the maid"; see the speech measure). */
+export const OUTSIDE_ID = '(outside the cast)';
 
 export const conversationParams = z
   .object({
@@ -15,7 +17,7 @@ export const conversationParams = z
     unknown: z
       .boolean()
       .default(true)
-      .describe('Keep a row and a column for speech whose speaker or addressee is not known, so the matrix adds up to all the dialogue. Default: true.'),
+      .describe('Keep a row and a column for speech whose speaker or addressee is not known, and a row for speakers outside the cast, so the matrix adds up to all the dialogue. Default: true.'),
   })
   .strict();
 
@@ -30,7 +32,7 @@ export interface ConversationPerson {
 
 export interface ConversationResult {
   value: 'words' | 'turns';
-  /** Speakers, most `value` first; the unknown row last. */
+  /** Speakers, most `value` first; the rows for speakers outside the cast and unknown speakers last. */
   rows: ConversationPerson[];
   /** Addressees, most `value` first; the unknown column last. */
   columns: ConversationPerson[];
@@ -45,15 +47,19 @@ export interface ConversationResult {
   note: string | null;
 }
 
+/** Cast first, then speakers outside the cast, then unknown speakers. */
+const rank = (id: string): number => (id === UNKNOWN_ID ? 2 : id === OUTSIDE_ID ? 1 : 0);
+
 export const conversation: Measure<ConversationParams, ConversationResult> = {
   name: 'conversation',
-  version: 1,
+  version: 2,
   params: conversationParams,
   needsCast: true,
   compute(ctx, params) {
     const a = analyseDialogue(ctx);
     const name = new Map(ctx.cast.map((c) => [c.id, c.name]));
     name.set(UNKNOWN_ID, 'Unknown');
+    name.set(OUTSIDE_ID, 'Outside the cast');
     const cell = new Map<string, { turns: number; words: number }>();
     const rowTot = new Map<string, { turns: number; words: number }>();
     const colTot = new Map<string, { turns: number; words: number }>();
@@ -66,7 +72,7 @@ export const conversation: Measure<ConversationParams, ConversationResult> = {
     let turns = 0;
     let words = 0;
     for (const t of a.turns) {
-      const s = t.speaker ?? UNKNOWN_ID;
+      const s = t.speaker ?? (t.rule === 'outsider' ? OUTSIDE_ID : UNKNOWN_ID);
       const d = t.addressee ?? UNKNOWN_ID;
       turns++;
       words += t.words;
@@ -81,9 +87,9 @@ export const conversation: Measure<ConversationParams, ConversationResult> = {
     }
     const order = (m: Map<string, { turns: number; words: number }>): ConversationPerson[] =>
       [...m.entries()]
-        .filter(([id]) => params.unknown || id !== UNKNOWN_ID)
+        .filter(([id]) => params.unknown || (id !== UNKNOWN_ID && id !== OUTSIDE_ID))
         .map(([id, c]) => ({ id, name: name.get(id) ?? id, turns: c.turns, words: c.words }))
-        .sort((x, y) => Number(x.id === UNKNOWN_ID) - Number(y.id === UNKNOWN_ID) || y[params.value] - x[params.value] || x.id.localeCompare(y.id));
+        .sort((x, y) => rank(x.id) - rank(y.id) || y[params.value] - x[params.value] || x.id.localeCompare(y.id));
     const rows = order(rowTot);
     const columns = order(colTot);
     const grid = (k: 'turns' | 'words'): number[][] => rows.map((r) => columns.map((c) => cell.get(`${r.id}\u0000${c.id}`)?.[k] ?? 0));
@@ -104,7 +110,7 @@ export const conversation: Measure<ConversationParams, ConversationResult> = {
   },
   method: {
     what: 'Who talks to whom: for every pair of characters, how many turns and words of dialogue the one addresses to the other, over the whole text and chapter by chapter.',
-    formula: `Each turn of dialogue gets a speaker and an addressee (see the speech measure for speakers). The addressee is the one a curator's pin names; else the one the tag names ("said Ada to her father", "asked Tom"); else the first character addressed by name inside the speech ("Come here, Tansy"); else the other side of the exchange (the previous speaker, if different and at most two paragraphs back, else the next). Cell (r, c) = turns (or words) spoken by r to c. Rows and columns are ordered by their totals; unknown speakers and addressees (below confidence ${MIN_CONFIDENCE}, or outside the cast) are counted in their own row and column, so the matrix adds up to all the dialogue.`,
+    formula: `Each turn of dialogue gets a speaker and an addressee (see the speech measure for speakers). The addressee is the one a curator's pin names; else the one the tag names ("said Ada to her father", "asked Tom"); else the first character addressed by name inside the speech ("Come here, Tansy"); else the other side of the exchange (the previous speaker, if different and at most two paragraphs back, else the next). Cell (r, c) = turns (or words) spoken by r to c. Rows and columns are ordered by their totals; speakers outside the cast (a tag such as "said the maid") have their own row, and unknown speakers and addressees (below confidence ${MIN_CONFIDENCE}, or spoken to someone outside the cast) their own row and column, so the matrix adds up to all the dialogue.`,
     source:
       'Speaker and addressee attribution as in conversational network studies of fiction (Elson, Dames & McKeown 2010, "Extracting Social Networks from Literary Fiction", ACL), with the rule-and-sieve speaker attribution of Elson & McKeown 2010 and Muzny et al. 2017.',
     caveats: [

@@ -95,7 +95,7 @@ export interface FrequencyResult {
 
 export const frequency: Measure<FrequencyParams, FrequencyResult> = {
   name: 'frequency',
-  version: 2,
+  version: 3,
   params: frequencyParams,
   needsCast: false,
   readsCast: (p) => p.by === 'speaker',

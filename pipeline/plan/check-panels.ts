@@ -166,8 +166,16 @@ export function checkPanels(plan: RawRecord, registry: Registry, r: Reporter): P
       r.report([...path, 'notes', n, 'at', 'character'], wording('plan/unknown-cast', { id: character, hint: castHint(character) }));
     });
   }
-  // Speakers and addressees named by dialogue pins.
+  // Speakers and addressees named by dialogue pins, and the narrator.
   asList(plan.texts).forEach((t, ti) => {
+    const narrator = asText(asRecord(asRecord(t)?.dialogue)?.narrator);
+    if (narrator !== undefined && !castIds.includes(narrator)) {
+      r.report(['texts', ti, 'dialogue', 'narrator'], {
+        code: 'plan/unknown-cast',
+        message: `unknown cast member "${narrator}"`,
+        hint: hasCast ? suggestionHint(narrator, castIds, 'cast ids') : 'the plan has no cast; add a "cast:" list naming the characters',
+      });
+    }
     asList(asRecord(asRecord(t)?.dialogue)?.pins).forEach((pin, pi) => {
       for (const key of ['speaker', 'addressee']) {
         const id = asText(asRecord(pin)?.[key]);

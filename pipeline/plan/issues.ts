@@ -155,6 +155,11 @@ function wordIssue(issue: Issue, value: unknown, about: string | undefined): Wor
       if (params.code === 'plan/bad-url') return wording('plan/bad-url', { detail: issue.message, hint: hint ?? '' });
       return wording('plan/invalid', { detail: issue.message, hint });
     }
+    case 'invalid_key': {
+      const inner = (issue as { issues?: { message?: string }[] }).issues?.[0]?.message;
+      const key = lastKey(issue.path as PathSegment[]);
+      return wording('plan/invalid-key', { key, reason: inner && !inner.startsWith('Invalid') ? inner : undefined, hint: about });
+    }
     case 'invalid_union':
       return wording('plan/invalid', { detail: `${describeValue(value)} matches none of the accepted forms`, hint: about });
     default:
@@ -198,6 +203,17 @@ export function wordIssues(issues: readonly Issue[], schema: z.ZodType, value: u
       const allowed = allowedKeys(schemaAt(schema, rel)) ?? [];
       for (const key of issue.keys) out.push({ path: [...rel, key], key, wording: unknownKey.word(key, suggestionHint(key, allowed, unknownKey.plural)) });
       continue;
+    }
+    // A value that takes one of several forms: when only one form fits its kind (a name, a mapping), word that form's issues.
+    if (issue.code === 'invalid_union' && Array.isArray((issue as { errors?: unknown }).errors)) {
+      const branches = (issue as unknown as { errors: Issue[][] }).errors;
+      // Forms whose issues lie inside the value (a mapping with a wrong key) fit best; then forms of the right kind.
+      const deep = branches.filter((b) => b.length > 0 && b.every((i) => i.path.length > 0));
+      const fitting = deep.length ? deep : branches.filter((b) => b.length > 0 && !b.some((i) => i.code === 'invalid_type' && i.path.length === 0));
+      if (fitting.length === 1) {
+        out.push(...wordIssues(fitting[0].map((i) => ({ ...i, path: [...issue.path, ...i.path] }) as Issue), schema, value, unknownKey));
+        continue;
+      }
     }
     out.push({ path: rel, wording: wordIssue(issue, valueAt(value, rel), descriptionOf(schemaAt(schema, rel))) });
   }

@@ -163,6 +163,28 @@ export const pinSchema = z
   })
   .describe("A curator's correction: who speaks one quotation.");
 
+const MARKS_NAMES = ['auto', 'double', 'single', 'guillemets', 'low', 'dash'] as const;
+const MARKS_HELP =
+  'double (“…” or "…"), single (‘…’ or \'…\'), guillemets («…» or »…«), low („…“), dash (a paragraph opening with — or –), or auto (read from the text)';
+
+export const marksNameSchema = z.enum(MARKS_NAMES).describe(`How speech is set off: ${MARKS_HELP}.`);
+
+export const marksSchema = z
+  .union([
+    marksNameSchema,
+    z.strictObject({
+      default: marksNameSchema.default('auto').describe(`The marks for every chapter not listed: ${MARKS_HELP}. Default "auto".`),
+      chapters: z
+        .record(z.string().regex(/^[1-9][0-9]*$/, { error: 'a chapter is named by its number, 1-based (e.g. 3:)' }), marksNameSchema)
+        .default({})
+        .describe('Chapters (by number, 1-based) set in other marks, e.g. { 3: single, 7: dash }. Default {} (none).'),
+    }),
+  ])
+  .default('auto')
+  .describe(
+    `The marks that set off speech in this text: one name for the whole text, or "default:" and "chapters:" for chapters that differ. Names: ${MARKS_HELP}. Default "auto": read from the text, chapter by chapter and scene by scene.`,
+  );
+
 export const dialogueSchema = z
   .strictObject({
     verbs: z
@@ -170,6 +192,10 @@ export const dialogueSchema = z
       .default([])
       .describe('Speech verbs to add to the built-in list (said, asked, cried, …), in their -ed or present form as printed. Default [] (none).'),
     pins: z.array(pinSchema).default([]).describe("Curator's corrections of speakers. Default [] (none)."),
+    marks: marksSchema,
+    narrator: idSchema
+      .optional()
+      .describe('Cast id of the narrator when the text is told in the first person: "I said" in the narrative is theirs. Optional, no default (no narrator).'),
   })
   .describe('How dialogue is read in this text. Optional.');
 
@@ -206,7 +232,7 @@ export const textSchema = z
       .optional()
       .describe('Chapter-heading pattern: a regular expression matched per line, ignoring case. Optional, no default (headings are found by the text reader).'),
     edition: text(LIMITS.prose).optional().describe(`Note on the edition the text was taken from, at most ${LIMITS.prose} characters. Optional, no default.`),
-    dialogue: dialogueSchema.default({ verbs: [], pins: [] }),
+    dialogue: dialogueSchema.default({ verbs: [], pins: [], marks: 'auto' }),
   })
   .describe('A text the exhibit reads.');
 

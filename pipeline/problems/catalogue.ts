@@ -176,6 +176,13 @@ export const catalogue = {
     hint: given,
     example: { detail: 'the language must be a two-letter ISO 639-1 code in lower case, e.g. "en"' },
   }),
+  'plan/invalid-key': entry<{ key: string; reason?: string; hint?: string }>({
+    title: 'A key the mapping does not accept',
+    severity: 'error',
+    message: (a) => `the key ${JSON.stringify(a.key)} is not accepted here${a.reason ? `: ${a.reason}` : ''}`,
+    hint: given,
+    example: { key: 'three', reason: 'a chapter is named by its number, 1-based (e.g. 3:)' },
+  }),
   'plan/invalid': entry<{ detail: string; hint?: string }>({
     title: 'A value the plan cannot use',
     severity: 'error',
@@ -488,6 +495,25 @@ export const catalogue = {
     example: {
       detail: 'the pin for chapter 2 starting “Hold the lamp” names the addressee "tamsn", who is not in the cast; the addressee was left empty. Use a cast id, or null.',
     },
+  }),
+  'dialogue/marks-without-speech': entry<{ chapter: number; paragraph: number; detail: string }>({
+    title: 'Quotation marks, but no speech found',
+    severity: 'warning',
+    message: (a) => `chapter ${a.chapter}, paragraph ${a.paragraph}: ${a.detail}`,
+    hint: () => undefined,
+    example: {
+      chapter: 4,
+      paragraph: 1,
+      detail:
+        'this chapter has 38 quotation marks or dashes, but no speech was found in it when read as double marks “…”. If its speech is set another way, name the marks for chapter 4 in the plan (dialogue.marks).',
+    },
+  }),
+  'dialogue/marks-chapter': entry<{ chapter: string; text: string; count: number }>({
+    title: 'dialogue.marks names a chapter the text lacks',
+    severity: 'error',
+    message: (a) => `chapter ${a.chapter} is named in dialogue.marks, but ${a.text} has ${a.count} chapter${a.count === 1 ? '' : 's'}; the setting was not applied`,
+    hint: () => 'number chapters from 1 as `vitrine check` lists them',
+    example: { chapter: '9', text: 'texts/the-lamps-of-wendle-staithe.txt', count: 6 },
   }),
   'dialogue/unbalanced': entry<{ chapter: number; paragraph: number; detail: string }>({
     title: 'Quotation marks that do not pair up',

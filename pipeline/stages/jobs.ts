@@ -104,6 +104,8 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
           speaker: p.speaker,
           ...(p.addressee !== undefined ? { addressee: p.addressee } : {}),
         })),
+        ...(t.dialogue.marks !== 'auto' ? { marks: t.dialogue.marks } : {}),
+        ...(t.dialogue.narrator !== undefined ? { narrator: t.dialogue.narrator } : {}),
       },
       where: t.where,
     })),

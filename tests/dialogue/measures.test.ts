@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { speech } from '../../pipeline/measures/speech.ts';
-import { conversation, UNKNOWN_ID } from '../../pipeline/measures/conversation.ts';
+import { conversation, OUTSIDE_ID, UNKNOWN_ID } from '../../pipeline/measures/conversation.ts';
 import { measures } from '../../pipeline/measures/registry.ts';
 import { tableToCsv } from '../../pipeline/stages/csv.ts';
 import { CAST, context } from './helpers.ts';
@@ -114,7 +114,7 @@ describe('speech measure', () => {
     expect(none.quotes).toEqual([]);
     expect(none.speakers).toEqual([]);
     expect(none.totals).toEqual({ quotes: 0, speech: 0, text: 0, turns: 0, words: 0 });
-    expect(none.note).toMatch(/No quotation marks/);
+    expect(none.note).toMatch(/No speech was found/);
     expect(speech.table(none, params).rows).toEqual([]);
     const c = conversation.compute(context('The river rose.', CAST), conversation.params.parse({}));
     expect(c.rows).toEqual([]);
@@ -156,20 +156,22 @@ describe('conversation measure', () => {
     const spoken = s.quotes.filter((q) => q.kind === 'speech');
     for (const from of [...r.rows.map((x) => x.id)]) {
       for (const to of r.columns.map((x) => x.id)) {
-        const want = spoken.filter((q) => (q.speaker ?? UNKNOWN_ID) === from && (q.addressee ?? UNKNOWN_ID) === to).reduce((a, q) => a + q.words, 0);
+        const row = (q: (typeof spoken)[number]) => q.speaker ?? (q.rule === 'outsider' ? OUTSIDE_ID : UNKNOWN_ID);
+        const want = spoken.filter((q) => row(q) === from && (q.addressee ?? UNKNOWN_ID) === to).reduce((a, q) => a + q.words, 0);
         expect(cell(from, to)).toBe(want);
       }
     }
   });
 
-  it('orders rows and columns by their totals, unknown last', () => {
+  it('orders rows and columns by their totals, speakers outside the cast and unknown ones last', () => {
     const totals = r.rows.map((x) => x.words);
-    const known = r.rows.filter((x) => x.id !== UNKNOWN_ID).map((x) => x.words);
+    const known = r.rows.filter((x) => x.id !== UNKNOWN_ID && x.id !== OUTSIDE_ID).map((x) => x.words);
     expect(known).toEqual([...known].sort((a, b) => b - a));
-    expect(r.rows.at(-1)!.id).toBe(UNKNOWN_ID);
+    // "Row on," said Captain Marr: a name outside the cast has its own row, after the cast.
+    expect(r.rows.at(-1)!).toMatchObject({ id: OUTSIDE_ID, name: 'Outside the cast' });
     expect(totals.reduce((a, b) => a + b, 0)).toBe(r.totals.words);
     const withoutUnknown = conversation.compute(ctx, conversation.params.parse({ unknown: false }));
-    expect(withoutUnknown.rows.some((x) => x.id === UNKNOWN_ID)).toBe(false);
+    expect(withoutUnknown.rows.some((x) => x.id === UNKNOWN_ID || x.id === OUTSIDE_ID)).toBe(false);
   });
 
   it('offers matrix and bars views of the same counts', () => {
