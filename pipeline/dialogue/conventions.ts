@@ -25,8 +25,11 @@
  * in scenes (separated by a blank-line ornament — * * *, ⁂, a rule — or by a
  * wider gap than the text's usual one between paragraphs) gives a scene its
  * own convention when the scene has at least two votes and they decide
- * against the chapter's. The plan may fix the convention for the whole text
- * or for single chapters (`dialogue.marks`); a fixed chapter is not split.
+ * against the chapter's (a chapter whose votes are split between its scenes
+ * takes its first deciding scene's). Guillemets read «…» or »…« by the
+ * direction of their closing marks, failing those of their opening marks.
+ * The plan may fix the convention for the whole text or for single chapters
+ * (`dialogue.marks`); a fixed chapter is not split.
  */
 
 import type { TextModel } from '../text/model.ts';
@@ -132,6 +135,26 @@ export function openingVote(text: string, a: number, b: number): { convention: C
   return null;
 }
 
+/**
+ * Guillemets in closing position in text[a, b) — after a word or punctuation
+ * (a space between allowed, as French printing sets it) and before a space,
+ * punctuation or the paragraph's end: » counts +1 («…» printing), « counts −1
+ * (»…« printing).
+ */
+function closingGuillemets(text: string, a: number, b: number): number {
+  let n = 0;
+  for (let i = a; i < b; i++) {
+    const c = text.charCodeAt(i);
+    if (c !== LAQUO && c !== RAQUO) continue;
+    if (i + 1 < b && /[\p{L}\p{N}]/u.test(text[i + 1])) continue;
+    let k = i - 1;
+    if (k >= a && /[ \u00a0\u202f]/.test(text[k])) k--;
+    if (k < a || /\s/.test(text[k]) || text.charCodeAt(k) === LAQUO || text.charCodeAt(k) === RAQUO) continue;
+    n += c === RAQUO ? 1 : -1;
+  }
+  return n;
+}
+
 /** Opening marks anywhere in text[a, b): a mark after a space (or the edge) and before a letter. */
 function innerVotes(text: string, a: number, b: number, into: Record<Convention, number>): void {
   for (let i = a; i < b; i++) {
@@ -170,11 +193,13 @@ export function readConventions(model: TextModel, setting: MarksSetting = AUTO):
   const vote: ({ convention: Convention; reversed: boolean } | null)[] = new Array(n);
   const breaks = new Set<number>();
   const gaps = new Uint16Array(n);
+  const guillemetClosers = new Int32Array(n);
   const gapCount = new Map<number, number>();
   for (let p = 0; p < n; p++) {
     const a = paragraphs.start[p];
     const b = paragraphs.end[p];
     vote[p] = openingVote(text, a, b);
+    guillemetClosers[p] = closingGuillemets(text, a, b);
     if (isOrnament(text, a, b)) breaks.add(p);
     if (p > 0 && paragraphs.chapter[p] === paragraphs.chapter[p - 1]) {
       let nl = 0;
@@ -188,17 +213,21 @@ export function readConventions(model: TextModel, setting: MarksSetting = AUTO):
   let most = -1;
   for (const [g, k] of gapCount) if (k > most || (k === most && g < usual)) [usual, most] = [g, k];
 
-  const count = (from: number, to: number): { votes: Record<Convention, number>; reversed: boolean } => {
+  const count = (from: number, to: number): { votes: Record<Convention, number>; reversed: boolean; closers: number } => {
     const votes = noVotes();
     let rev = 0;
     let fwd = 0;
+    let closers = 0;
     for (let p = from; p < to; p++) {
+      closers += guillemetClosers[p];
       const v = vote[p];
       if (!v) continue;
       votes[v.convention]++;
       if (v.convention === 'guillemets') v.reversed ? rev++ : fwd++;
     }
-    return { votes, reversed: rev > fwd };
+    // Guillemets: the closing marks tell the direction (a French paragraph that goes on from the one before
+    // opens with », like a German opening); failing them, the opening ones.
+    return { votes, reversed: closers !== 0 ? closers < 0 : rev > fwd, closers };
   };
 
   // 1. The text.
@@ -223,32 +252,36 @@ export function readConventions(model: TextModel, setting: MarksSetting = AUTO):
     const to = from + ch.paragraphCount;
     const own = count(from, to);
     const fixed = setting.chapters.get(ch.index + 1) ?? (setting.text !== 'auto' ? setting.text : 'auto');
-    const read = fixed === 'auto' ? decide(own.votes) : null;
-    const chapterConv: Convention = fixed !== 'auto' ? fixed : (read ?? textConv);
-    const source: ConventionSource = fixed !== 'auto' ? 'plan' : read !== null ? 'read' : 'text';
-    const reversed = own.reversed || (chapterConv === 'guillemets' && own.votes.guillemets === 0 && all.reversed);
-    const scenes: SceneConvention[] = [];
+    // The chapter's scenes, and what each one's own votes decide (at least two of them).
+    const ranges: [number, number][] = [];
     let start = from;
     for (let p = from; p <= to; p++) {
       const isBreak = p < to && (breaks.has(p) || (p > from && gaps[p] > usual && gaps[p] >= 3));
       if (p < to && !isBreak) continue;
-      const end = p;
-      if (end > start) {
-        const sc = count(start, end);
-        const mine = fixed === 'auto' ? decide(sc.votes, 2) : null;
-        const own2 = mine !== null && mine !== chapterConv;
-        scenes.push({
-          firstParagraph: start,
-          endParagraph: end,
-          convention: own2 ? mine : chapterConv,
-          source: own2 ? 'read' : source,
-          reversed: own2 ? sc.reversed : sc.votes.guillemets > 0 ? sc.reversed : reversed,
-          votes: sc.votes,
-        });
-      }
+      if (p > start) ranges.push([start, p]);
       start = breaks.has(p) ? p + 1 : p;
     }
-    if (scenes.length === 0) scenes.push({ firstParagraph: from, endParagraph: to, convention: chapterConv, source, reversed, votes: own.votes });
+    if (ranges.length === 0) ranges.push([from, to]);
+    const counted = ranges.map(([a, b]) => count(a, b));
+    const decided = counted.map((c) => (fixed === 'auto' && ranges.length > 1 ? decide(c.votes, 2) : null));
+    // A chapter whose votes are split between its scenes takes its first scene's convention.
+    const read = fixed === 'auto' ? (decide(own.votes) ?? decided.find((d) => d !== null) ?? null) : null;
+    const chapterConv: Convention = fixed !== 'auto' ? fixed : (read ?? textConv);
+    const source: ConventionSource = fixed !== 'auto' ? 'plan' : read !== null ? 'read' : 'text';
+    const reversed = own.votes.guillemets > 0 || own.closers !== 0 ? own.reversed : all.reversed;
+    const scenes: SceneConvention[] = ranges.map(([a, b], k) => {
+      const mine = decided[k];
+      const differs = mine !== null && mine !== chapterConv;
+      const sc = counted[k];
+      return {
+        firstParagraph: a,
+        endParagraph: b,
+        convention: differs ? mine : chapterConv,
+        source: differs ? 'read' : source,
+        reversed: sc.votes.guillemets > 0 || sc.closers !== 0 ? sc.reversed : reversed,
+        votes: sc.votes,
+      };
+    });
     for (const s of scenes) {
       for (let p = s.firstParagraph; p < s.endParagraph; p++) {
         conv[p] = s.convention;

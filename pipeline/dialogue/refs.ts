@@ -38,6 +38,9 @@ const DETERMINERS: ReadonlySet<string> = new Set([
   'poor', 'another', 'both', 'all', 'each', 'somebody', 'someone', 'everyone', 'everybody', 'nobody', 'one',
 ]);
 
+/** Ordinals that the adverb list also holds. common practice, no source. */
+const ORDINALS: ReadonlySet<string> = new Set(['first', 'next', 'last', 'only']);
+
 /** Words that end a descriptive noun phrase. common practice, no source. */
 const PHRASE_STOPS: ReadonlySet<string> = new Set([
   'to', 'with', 'from', 'at', 'in', 'on', 'of', 'by', 'for', 'into', 'over', 'under', 'behind', 'beside', 'and',
@@ -166,7 +169,8 @@ export function refAt(v: TokenView, cl: readonly number[], k: number, role: 'sub
       const inner = mentionAt(v, cl, j);
       if (inner) return inner.kind === 'desc' ? { ...inner, first: k } : { ...inner, first: k };
       const wj = word(v, cl[j]);
-      if (PHRASE_STOPS.has(wj) || isAdverb(v, cl[j]) || v.quoteOf[cl[j]] >= 0 || verbAt(v, cl, j)) break;
+      // An ordinal right after the article is part of the phrase: "the first fisherman", "the next man".
+      if (PHRASE_STOPS.has(wj) || (isAdverb(v, cl[j]) && !(j === k + 1 && ORDINALS.has(wj))) || v.quoteOf[cl[j]] >= 0 || verbAt(v, cl, j)) break;
       j++;
     }
     if (j === k + 1) return null;

@@ -380,7 +380,7 @@ export function asksWho(s: string): boolean {
   const t = s.toLowerCase().replace(/\u2019/g, "'");
   if (!t.includes('?')) return false;
   return (
-    /\bwho\b[^?.!]*\b(?:you|ye|thou)\b/.test(t) ||
+    /\bwho(?:'re|\s+(?:are|were|might|may|could|would|can|art|be))\b[^?.!]{0,24}\b(?:you|ye|thou)\b/.test(t) ||
     /\byour name\b/.test(t) ||
     /\bwho(?:'s| is) (?:there|that|this|it)\b/.test(t) ||
     /\bwhat[^?.!]*\bcall(?:ed)? you\b/.test(t)
