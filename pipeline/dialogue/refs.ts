@@ -292,7 +292,10 @@ function names(v: TokenView, cl: readonly number[], k: number): Ref {
     if (inner) return { ...inner, first: k };
     j++;
   }
-  return { kind: 'outsider', text: cl.slice(k, j).map((x) => surface(v, x)).join(' '), first: k, next: j };
+  const text = cl.slice(k, j).map((x) => surface(v, x)).join(' ');
+  // "Mr Quist's exhibition": a possessive speaks of the person; it names no one acting.
+  if (possessive(v, cl[j - 1])) return { kind: 'desc', text, first: k, next: j };
+  return { kind: 'outsider', text, first: k, next: j };
 }
 
 /** Whether two referring expressions in one paragraph could name the same person. */
