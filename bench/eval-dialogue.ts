@@ -29,7 +29,7 @@ import { join, resolve } from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import type { CastMember } from '../pipeline/text/model.ts';
 import type { DialogueSettings } from '../pipeline/measures/types.ts';
-import { evaluateText, type EvalFigures, type RuleScore, type SpeakerScore } from '../pipeline/dialogue/evaluate.ts';
+import { combine, evaluateText, type EvalFigures, type Totals } from '../pipeline/dialogue/evaluate.ts';
 
 const root = resolve(import.meta.dirname, '..');
 const dir = join(root, 'tests/fixtures/dialogue');
@@ -52,44 +52,7 @@ export function evaluateFixture(name: string): EvalFigures {
 
 const pct = (x: number): string => `${(x * 100).toFixed(1)}%`;
 
-/** Sum figures over several texts. */
-export function combine(all: readonly EvalFigures[]): Pick<EvalFigures, 'speakers' | 'perRule' | 'perMarks' | 'outsiders' | 'addressees'> {
-  const speakers: SpeakerScore = { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 };
-  const perRule: Record<string, RuleScore> = {};
-  const perMarks: Record<string, SpeakerScore> = {};
-  const outsiders = { total: 0, nulls: 0, givenBy: {} as Record<string, number> };
-  const addressees = { total: 0, correct: 0, accuracy: 0, nulls: 0 };
-  const r4 = (a: number, b: number): number => (b ? Math.round((a / b) * 10000) / 10000 : 0);
-  for (const f of all) {
-    for (const k of ['total', 'correct', 'nulls'] as const) speakers[k] += f.speakers[k];
-    for (const [rule, s] of Object.entries(f.perRule)) {
-      const r = (perRule[rule] ??= { total: 0, correct: 0, accuracy: 0, wrong: 0, nulls: 0, addressees: { total: 0, correct: 0, accuracy: 0 } });
-      for (const k of ['total', 'correct', 'wrong', 'nulls'] as const) r[k] += s[k];
-      r.addressees.total += s.addressees.total;
-      r.addressees.correct += s.addressees.correct;
-    }
-    for (const [marks, s] of Object.entries(f.perMarks)) {
-      const m = (perMarks[marks] ??= { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 });
-      for (const k of ['total', 'correct', 'nulls'] as const) m[k] += s[k];
-    }
-    outsiders.total += f.outsiders.total;
-    outsiders.nulls += f.outsiders.nulls;
-    for (const [rule, n] of Object.entries(f.outsiders.givenBy)) outsiders.givenBy[rule] = (outsiders.givenBy[rule] ?? 0) + n;
-    for (const k of ['total', 'correct', 'nulls'] as const) addressees[k] += f.addressees[k];
-  }
-  for (const s of [speakers, ...Object.values(perMarks)]) {
-    s.accuracy = r4(s.correct, s.total);
-    s.nullRate = r4(s.nulls, s.total);
-  }
-  for (const r of Object.values(perRule)) {
-    r.accuracy = r4(r.correct, r.total);
-    r.addressees.accuracy = r4(r.addressees.correct, r.addressees.total);
-  }
-  addressees.accuracy = r4(addressees.correct, addressees.total);
-  return { speakers, perRule, perMarks, outsiders, addressees };
-}
-
-function printTables(f: Pick<EvalFigures, 'speakers' | 'perRule' | 'perMarks' | 'outsiders' | 'addressees'>, out: (s: string) => void): void {
+function printTables(f: Totals, out: (s: string) => void): void {
   out(`  speakers:   ${pct(f.speakers.accuracy)} correct (${f.speakers.correct}/${f.speakers.total} spoken quotations with a cast speaker)`);
   out(`  null rate:  ${pct(f.speakers.nullRate)} (${f.speakers.nulls} left without a speaker)`);
   const given = Object.entries(f.outsiders.givenBy).map(([r, n]) => `${n} by ${r}`).join(', ');

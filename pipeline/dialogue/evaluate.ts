@@ -126,6 +126,54 @@ export interface EvalFigures {
 
 const ratio = (a: number, b: number): number => (b ? Math.round((a / b) * 10000) / 10000 : 0);
 
+/** The figures that add up over texts. */
+export type Totals = Pick<EvalFigures, 'speakers' | 'perRule' | 'perMarks' | 'outsiders' | 'addressees'>;
+
+/** Set every accuracy and null rate from its counts. */
+function fillRatios(f: Pick<Totals, 'speakers' | 'perRule' | 'perMarks' | 'addressees'>): void {
+  for (const s of [f.speakers, ...Object.values(f.perMarks)]) {
+    s.accuracy = ratio(s.correct, s.total);
+    s.nullRate = ratio(s.nulls, s.total);
+  }
+  for (const r of Object.values(f.perRule)) {
+    r.accuracy = ratio(r.correct, r.total);
+    r.addressees.accuracy = ratio(r.addressees.correct, r.addressees.total);
+  }
+  f.addressees.accuracy = ratio(f.addressees.correct, f.addressees.total);
+}
+
+/** Sum the figures of several texts. */
+export function combine(all: readonly EvalFigures[]): Totals {
+  const t: Totals = {
+    speakers: { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 },
+    perRule: {},
+    perMarks: {},
+    outsiders: { total: 0, nulls: 0, givenBy: {} },
+    addressees: { total: 0, correct: 0, accuracy: 0, nulls: 0 },
+  };
+  for (const f of all) {
+    for (const k of ['total', 'correct', 'nulls'] as const) {
+      t.speakers[k] += f.speakers[k];
+      t.addressees[k] += f.addressees[k];
+    }
+    for (const [rule, s] of Object.entries(f.perRule)) {
+      const r = (t.perRule[rule] ??= { total: 0, correct: 0, accuracy: 0, wrong: 0, nulls: 0, addressees: { total: 0, correct: 0, accuracy: 0 } });
+      for (const k of ['total', 'correct', 'wrong', 'nulls'] as const) r[k] += s[k];
+      r.addressees.total += s.addressees.total;
+      r.addressees.correct += s.addressees.correct;
+    }
+    for (const [marks, s] of Object.entries(f.perMarks)) {
+      const m = (t.perMarks[marks] ??= { total: 0, correct: 0, accuracy: 0, nulls: 0, nullRate: 0 });
+      for (const k of ['total', 'correct', 'nulls'] as const) m[k] += s[k];
+    }
+    t.outsiders.total += f.outsiders.total;
+    t.outsiders.nulls += f.outsiders.nulls;
+    for (const [rule, n] of Object.entries(f.outsiders.givenBy)) t.outsiders.givenBy[rule] = (t.outsiders.givenBy[rule] ?? 0) + n;
+  }
+  fillRatios(t);
+  return t;
+}
+
 /** Align gold rows with the quotations found: the quotation index matched by each row, or -1. */
 export function alignGold(quotes: readonly AttributedQuote[], gold: readonly GoldRow[]): number[] {
   const forms = quotes.map((q) => pinForm(q.text));
@@ -190,15 +238,7 @@ export function scoreDialogue(analysis: DialogueAnalysis, gold: readonly GoldRow
       else if (a === null) addressees.nulls++;
     }
   });
-  for (const s of [speakers, ...Object.values(perMarks)]) {
-    s.accuracy = ratio(s.correct, s.total);
-    s.nullRate = ratio(s.nulls, s.total);
-  }
-  for (const r of Object.values(perRule)) {
-    r.accuracy = ratio(r.correct, r.total);
-    r.addressees.accuracy = ratio(r.addressees.correct, r.addressees.total);
-  }
-  addressees.accuracy = ratio(addressees.correct, addressees.total);
+  fillRatios({ speakers, perRule, perMarks, addressees });
   kinds.accuracy = ratio(kinds.correct, kinds.total);
   const used = new Set(align.filter((k) => k >= 0));
   return {
