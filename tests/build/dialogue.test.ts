@@ -57,9 +57,9 @@ describe('vitrine check reads the speech marks chapter by chapter', () => {
     const r = vitrine(['check', exhibit('harbour-book')]);
     expect(r.status).toBe(0);
     const out = r.stdout;
-    expect(out).toMatch(/1\. Chapter I: The Pilot's Wife .*\n\s+speech in double marks “…” \(read from its marks\)/);
-    expect(out).toMatch(/2\. Chapter II: The Captain's Visit .*\n\s+speech in single marks ‘…’ \(read from its marks\)/);
-    expect(out).toMatch(/3\. Chapter III: The Steam Boat .*\n\s+speech in double marks “…” \(read from its marks\)\n\s+from paragraph 1 \(line \d+\): double marks “…”.*\n\s+from paragraph \d+ \(line \d+\): single marks ‘…’ \(read from its marks\)/);
+    expect(out).toMatch(/1\. Chapter I: The Pilot's Wife\b.*\n\s+speech in double marks “…” \(read from its marks\)/);
+    expect(out).toMatch(/2\. Chapter II: The Captain's Visit\b.*\n\s+speech in single marks ‘…’ \(read from its marks\)/);
+    expect(out).toMatch(/3\. Chapter III: The Steam Boat\b.*\n\s+speech in double marks “…” \(read from its marks\)\n\s+from paragraph 1 \(line \d+\): double marks “…”.*\n\s+from paragraph \d+ \(line \d+\): single marks ‘…’ \(read from its marks\)/);
     expect(out).toMatch(/4\. Chapter IV: .*\n\s+speech in guillemets «…»/);
     expect(out).toMatch(/5\. Chapter V: .*\n\s+speech in low-high marks „…“/);
   });
