@@ -15,7 +15,7 @@
  * width grows linearly with weight.
  *
  * Names. Placed greedily, largest node first, in the first free one of
- * eight positions around the node (pointlabels.ts), clear of other names and
+ * eight positions around the node (labels.ts), clear of other names and
  * nodes and, where possible, of links. A name with no free position is
  * replaced by a number, itself placed the same way, and listed in a key
  * under the drawing.
@@ -30,8 +30,8 @@ import { defineChart, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { forceLayout } from './force.ts';
-import { placeAll, placeLabel } from './pointlabels.ts';
-import type { Disc, PlaceContext, Rect, Segment } from './pointlabels.ts';
+import { boxOf, placeAllEightWays, placeEightWays } from './labels.ts';
+import type { Box, Disc, PositionContext, Segment } from './labels.ts';
 import { reach, shapeFor, symbol } from './shapes.ts';
 import type { Shape } from './shapes.ts';
 import { isDataAt, markerHeight, markerWidth, namedAs, noteInline } from './notes.ts';
@@ -277,7 +277,7 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
   // Larger networks get a taller plot, so names keep finding room.
   const n = prep.nodes.length;
   const plotH = narrow ? Math.min(560, Math.max(340, 220 + 12 * n)) : Math.min(560, Math.max(400, 300 + 8 * n));
-  const plot: Rect = { x: PAD, y, width: W - 2 * PAD, height: plotH };
+  const plot = { x: PAD, y, width: W - 2 * PAD, height: plotH };
   // Room around the nodes for names: about half a name across, a line and a half down.
   const mx = narrow ? 40 : 48;
   const my = 24;
@@ -302,7 +302,7 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
   // Links, heaviest on top.
   const maxW = Math.max(...drawnLinks.map((l) => l.weight), 0);
   const widthOf = (w: number) => 1 + ((narrow ? 4 : 6) - 1) * (maxW > 0 ? w / maxW : 0);
-  const segments: Segment[] = drawnLinks.map((l) => ({ x1: at.get(l.source)!.x, y1: at.get(l.source)!.y, x2: at.get(l.target)!.x, y2: at.get(l.target)!.y }));
+  const segments: Segment[] = drawnLinks.map((l) => ({ a: { x: at.get(l.source)!.x, y: at.get(l.source)!.y }, b: { x: at.get(l.target)!.x, y: at.get(l.target)!.y } }));
   parts.push(
     el(
       'g',
@@ -313,7 +313,7 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
         .map(({ l, s }) =>
           el(
             'line',
-            { x1: s.x1, y1: s.y1, x2: s.x2, y2: s.y2, 'stroke-width': widthOf(l.weight) },
+            { x1: s.a.x, y1: s.a.y, x2: s.b.x, y2: s.b.y, 'stroke-width': widthOf(l.weight) },
             titleEl(`${at.get(l.source)!.node.name} \u2013 ${at.get(l.target)!.node.name}: ${prep.fmtWeight(l.weight)} (${data.weightLabel})`),
           ),
         ),
@@ -339,7 +339,7 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
 
   // Names: largest node first, each in the first free position around its node.
   const discs: Disc[] = drawn.map((d) => ({ x: d.x, y: d.y, r: d.reach }));
-  const place: PlaceContext = { bounds: plot, discs, segments, taken: [], gap: 3, pad: 2 };
+  const place: PositionContext = { bounds: boxOf(plot), discs, segments, taken: [], gap: 3, pad: 2 };
   const nameMax = narrow ? 110 : 160;
   const labels: string[] = [];
   const markers: string[] = [];
@@ -353,10 +353,11 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
       height: Math.max(size + 2, notes.length ? markerHeight(theme) : 0),
     };
   };
-  const write = (d: Drawn, text: string, size: number, rect: Rect) => {
-    const cy = rect.y + rect.height / 2;
-    labels.push(textEl(text, { x: rect.x, y: cy + size * 0.35, 'font-size': size === fs ? undefined : size, 'data-node': d.node.id }));
-    let mx = rect.x + textWidth(text, size) + 4;
+  /** A name (or key number) set in `box`, its middle `height / 2` below the box's top, with the node's note markers after it. */
+  const write = (d: Drawn, text: string, size: number, box: Box, height: number) => {
+    const cy = box.y0 + height / 2;
+    labels.push(textEl(text, { x: box.x0, y: cy + size * 0.35, 'font-size': size === fs ? undefined : size, 'data-node': d.node.id }));
+    let mx = box.x0 + textWidth(text, size) + 4;
     for (const n of notesOf(d)) {
       const w = markerWidth(n.note.label, theme);
       markers.push(noteInline(n.note, mx + w / 2, cy, theme));
@@ -364,29 +365,29 @@ function drawNetwork(ctx: Ctx): { body: string; height: number } {
     }
   };
   const names = order.map((d) => truncateText(d.node.name, nameMax, fs));
-  const placed = placeAll(
-    order.map((d, i) => request(d, names[i], fs)),
-    place,
-  );
+  const requests = order.map((d, i) => request(d, names[i], fs));
+  const placed = placeAllEightWays(requests, place);
   const keyed: Drawn[] = [];
   order.forEach((d, i) => {
     const p = placed[i];
-    if (p) write(d, names[i], fs, p.rect);
+    if (p) write(d, names[i], fs, p.box, requests[i].height);
     else keyed.push(d);
   });
   // Names that found no room: a number instead, and a key below.
   keyed.forEach((d, i) => {
     const key = String(i + 1);
-    const p = placeLabel(request(d, key, small), place);
+    const req = request(d, key, small);
+    const p = placeEightWays(req, place);
     // Nowhere free at all: the number goes to the right of the node regardless.
-    write(d, key, small, p ? p.rect : { x: d.x + d.reach + 3, y: d.y - small / 2, width: 0, height: small });
+    if (p) write(d, key, small, p.box, req.height);
+    else write(d, key, small, boxOf({ x: d.x + d.reach + 3, y: d.y - small / 2, width: 0, height: small }), small);
   });
   parts.push(
     el('g', { class: 'vt-node-labels', stroke: theme.paper, 'stroke-width': 3, 'stroke-linejoin': 'round', style: 'paint-order:stroke' }, labels),
   );
   if (markers.length) parts.push(el('g', { class: 'vt-notes' }, markers));
   // The drawing ends under its lowest node or name.
-  const lowest = Math.max(...drawn.map((d) => d.y + d.reach), ...place.taken.map((t) => t.y + t.height));
+  const lowest = Math.max(...drawn.map((d) => d.y + d.reach), ...place.taken.map((t) => t.y1));
   y = Math.min(plot.y + plot.height, lowest + 8) + 6;
 
   if (keyed.length) {

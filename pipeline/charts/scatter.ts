@@ -2,7 +2,7 @@
  * A scatter plot of labelled points: two value axes with round ("nice")
  * ends from d3-scale, groups told apart by colour and shape with a legend,
  * and names set beside the points where they fit without touching a point
- * or another name (greedy, most extreme points first; see labels2d.ts).
+ * or another name (greedy, most extreme points first; see labels.ts).
  */
 
 import { z } from 'zod';
@@ -15,9 +15,9 @@ import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { thinEvenly } from './place.ts';
-import { placeLabels } from './labels2d.ts';
+import { placeInRings } from './labels.ts';
 import { clipEnd } from './clip.ts';
-import type { Box, Disc, LabelRequest } from './labels2d.ts';
+import type { Box, Disc, RingRequest, Segment } from './labels.ts';
 import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
 import type { NoteAnchor } from './notes.ts';
 
@@ -337,8 +337,8 @@ function drawScatter(ctx: Ctx, lane: boolean): { body: string; height: number; u
   });
   const obstacles = discs.filter((_, i) => rep[i] === i);
   const bounds: Box = { x0: plotLeft + 2, y0: plotTop - small, x1: W - PAD, y1: plotBottom + 4 };
-  const noteRequests: LabelRequest[] = ctx.notes.map(({ note, point }) => ({ point: discs[rep[prep.points.indexOf(point)]], width: markerWidth(note.label, theme), height: mh }));
-  const notePlaces = placeLabels(
+  const noteRequests: RingRequest[] = ctx.notes.map(({ note, point }) => ({ point: discs[rep[prep.points.indexOf(point)]], width: markerWidth(note.label, theme), height: mh }));
+  const notePlaces = placeInRings(
     noteRequests,
     noteRequests.map((_, i) => i),
     obstacles,
@@ -346,7 +346,7 @@ function drawScatter(ctx: Ctx, lane: boolean): { body: string; height: number; u
   );
   const inline: string[] = [];
   const anchors: NoteAnchor[] = [];
-  const lines: { a: { x: number; y: number }; b: { x: number; y: number } }[] = [];
+  const lines: Segment[] = [];
   ctx.notes.forEach(({ note }, i) => {
     const pl = notePlaces[i];
     const d = noteRequests[i].point;
@@ -377,9 +377,9 @@ function drawScatter(ctx: Ctx, lane: boolean): { body: string; height: number; u
           )
         : '',
     );
-    const requests: LabelRequest[] = prep.points.map((_, i) => ({ point: discs[i], width: textWidth(texts[i], small), height: small + 2 }));
+    const requests: RingRequest[] = prep.points.map((_, i) => ({ point: discs[i], width: textWidth(texts[i], small), height: small + 2 }));
     const taken = notePlaces.flatMap((pl) => (pl ? [pl.box] : []));
-    const placed = placeLabels(requests, order, obstacles, bounds, { taken, lines });
+    const placed = placeInRings(requests, order, obstacles, bounds, { taken, lines });
     parts.push(
       el(
         'g',

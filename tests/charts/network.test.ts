@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { network, networkOptions } from '../../pipeline/charts/network.ts';
 import { defaultTheme } from '../../pipeline/charts/theme.ts';
 import { lcg } from '../../pipeline/charts/force.ts';
-import { discOverlapsRect, placeAll, placeLabel, rectsOverlap, segmentHitsRect } from '../../pipeline/charts/pointlabels.ts';
-import type { PlaceContext } from '../../pipeline/charts/pointlabels.ts';
+import { boxOf, discOverlaps, overlaps, placeAllEightWays, placeEightWays, segmentHitsBox } from '../../pipeline/charts/labels.ts';
+import type { PositionContext } from '../../pipeline/charts/labels.ts';
 import { SHAPES, reach, symbol } from '../../pipeline/charts/shapes.ts';
 import { textWidth } from '../../pipeline/charts/svg.ts';
 import type { NetworkData } from '../../pipeline/charts/types.ts';
@@ -90,8 +90,8 @@ function expectNoCollisions(svg: string): void {
   const nodes = nodeMarks(svg);
   const labels = labelMarks(svg);
   labels.forEach((a, i) => {
-    labels.slice(i + 1).forEach((b) => expect(rectsOverlap(a.box, b.box), `${a.text} / ${b.text}`).toBe(false));
-    for (const n of nodes) expect(discOverlapsRect({ x: n.x, y: n.y, r: n.reach - 0.05 }, a.box), `${a.text} on node ${n.id}`).toBe(false);
+    labels.slice(i + 1).forEach((b) => expect(overlaps(boxOf(a.box), boxOf(b.box)), `${a.text} / ${b.text}`).toBe(false));
+    for (const n of nodes) expect(discOverlaps({ x: n.x, y: n.y, r: n.reach - 0.05 }, boxOf(a.box)), `${a.text} on node ${n.id}`).toBe(false);
   });
 }
 
@@ -276,32 +276,32 @@ describe('network: alt text, notes and table', () => {
 describe('point-label placement', () => {
   it('tests segments, discs and rectangles against each other', () => {
     // common practice, no source: Liang–Barsky clipping; nearest point of a rectangle to a disc's centre.
-    const r = { x: 0, y: 0, width: 10, height: 10 };
-    expect(segmentHitsRect({ x1: -5, y1: 5, x2: 15, y2: 5 }, r)).toBe(true);
-    expect(segmentHitsRect({ x1: -5, y1: -1, x2: 15, y2: -1 }, r)).toBe(false);
-    expect(segmentHitsRect({ x1: -5, y1: 12, x2: 12, y2: -5 }, r)).toBe(true);
-    expect(segmentHitsRect({ x1: 2, y1: 2, x2: 3, y2: 3 }, r)).toBe(true);
-    expect(discOverlapsRect({ x: 13, y: 13, r: 4 }, r)).toBe(false); // corner distance √18 ≈ 4.24
-    expect(discOverlapsRect({ x: 13, y: 13, r: 4.5 }, r)).toBe(true);
-    expect(rectsOverlap(r, { x: 10, y: 0, width: 5, height: 5 })).toBe(false);
-    expect(rectsOverlap(r, { x: 10, y: 0, width: 5, height: 5 }, 1)).toBe(true);
+    const r = boxOf({ x: 0, y: 0, width: 10, height: 10 });
+    expect(segmentHitsBox({ x: -5, y: 5 }, { x: 15, y: 5 }, r)).toBe(true);
+    expect(segmentHitsBox({ x: -5, y: -1 }, { x: 15, y: -1 }, r)).toBe(false);
+    expect(segmentHitsBox({ x: -5, y: 12 }, { x: 12, y: -5 }, r)).toBe(true);
+    expect(segmentHitsBox({ x: 2, y: 2 }, { x: 3, y: 3 }, r)).toBe(true);
+    expect(discOverlaps({ x: 13, y: 13, r: 4 }, r)).toBe(false); // corner distance √18 ≈ 4.24
+    expect(discOverlaps({ x: 13, y: 13, r: 4.5 }, r)).toBe(true);
+    expect(overlaps(r, boxOf({ x: 10, y: 0, width: 5, height: 5 }))).toBe(false);
+    expect(overlaps(r, boxOf({ x: 10, y: 0, width: 5, height: 5 }), 1)).toBe(true);
   });
   it('takes the first free position, then moves a neighbour to make room', () => {
-    const ctx = (): PlaceContext => ({ bounds: { x: 0, y: 0, width: 100, height: 100 }, discs: [], segments: [], taken: [], gap: 2, pad: 1 });
+    const ctx = (): PositionContext => ({ bounds: boxOf({ x: 0, y: 0, width: 100, height: 100 }), discs: [], segments: [], taken: [], gap: 2, pad: 1 });
     const c = ctx();
-    expect(placeLabel({ disc: { x: 50, y: 50, r: 5 }, width: 20, height: 10 }, c)!.pos).toBe('E');
+    expect(placeEightWays({ disc: { x: 50, y: 50, r: 5 }, width: 20, height: 10 }, c)!.pos).toBe('E');
     // At the right edge, the right is out of bounds: the left is next.
-    expect(placeLabel({ disc: { x: 95, y: 20, r: 3 }, width: 20, height: 10 }, ctx())!.pos).toBe('W');
+    expect(placeEightWays({ disc: { x: 95, y: 20, r: 3 }, width: 20, height: 10 }, ctx())!.pos).toBe('W');
     // A label whose only free position is taken by an earlier label gets it when that label can move.
     const lone = { x: 5, y: 50, r: 3 };
     const other = { x: 75, y: 50, r: 2 };
-    const d: PlaceContext = { ...ctx(), discs: [lone, other, { x: 20, y: 40, r: 3 }, { x: 20, y: 60, r: 3 }] };
-    const placed = placeAll([{ disc: other, width: 36, height: 8 }, { disc: lone, width: 30, height: 10 }], d);
+    const d: PositionContext = { ...ctx(), discs: [lone, other, { x: 20, y: 40, r: 3 }, { x: 20, y: 60, r: 3 }] };
+    const placed = placeAllEightWays([{ disc: other, width: 36, height: 8 }, { disc: lone, width: 30, height: 10 }], d);
     expect(placed[1]!.pos).toBe('E');
     expect(placed[0]!.pos).toBe('N');
-    expect(rectsOverlap(placed[0]!.rect, placed[1]!.rect, 1)).toBe(false);
+    expect(overlaps(placed[0]!.box, placed[1]!.box, 1)).toBe(false);
     // Without the repair the first label would have kept its first choice, on the left.
-    expect(placeLabel({ disc: other, width: 36, height: 8 }, { ...ctx(), discs: d.discs })!.pos).toBe('W');
+    expect(placeEightWays({ disc: other, width: 36, height: 8 }, { ...ctx(), discs: d.discs })!.pos).toBe('W');
   });
 });
 

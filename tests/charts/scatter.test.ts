@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { byProminence, scatter, scatterOptions } from '../../pipeline/charts/scatter.ts';
-import { distanceToBox, overlaps, placeLabels, segmentHitsBox } from '../../pipeline/charts/labels2d.ts';
-import type { Box, Disc } from '../../pipeline/charts/labels2d.ts';
+import { distanceToBox, overlaps, placeInRings, segmentHitsBox } from '../../pipeline/charts/labels.ts';
+import type { Box, Disc } from '../../pipeline/charts/labels.ts';
 import { contrastRatio, defaultTheme } from '../../pipeline/charts/theme.ts';
 import { textWidth } from '../../pipeline/charts/svg.ts';
 import type { ScatterData } from '../../pipeline/charts/types.ts';
@@ -109,14 +109,14 @@ describe('scatter: groups and names', () => {
   });
 });
 
-describe('placeLabels', () => {
+describe('placeInRings', () => {
   const bounds: Box = { x0: 0, y0: 0, x1: 400, y1: 300 };
   const disc = (x: number, y: number): Disc => ({ x, y, r: 5 });
 
   it('sets a lone name to the right of its point', () => {
     // common practice, no source: the right of a point is the first choice in cartographic point labelling.
     const d = disc(100, 100);
-    const [p] = placeLabels([{ point: d, width: 50, height: 15 }], [0], [d], bounds);
+    const [p] = placeInRings([{ point: d, width: 50, height: 15 }], [0], [d], bounds);
     expect(p!.anchor).toBe('start');
     expect(p!.box.x0).toBeGreaterThan(105);
     expect((p!.box.y0 + p!.box.y1) / 2).toBe(100);
@@ -125,11 +125,11 @@ describe('placeLabels', () => {
 
   it('moves to the left at the right edge, and keeps off names placed before', () => {
     const a = disc(380, 100);
-    const [p] = placeLabels([{ point: a, width: 50, height: 15 }], [0], [a], bounds);
+    const [p] = placeInRings([{ point: a, width: 50, height: 15 }], [0], [a], bounds);
     expect(p!.anchor).toBe('end');
     const b = disc(100, 100);
     const c = disc(100, 118);
-    const out = placeLabels([{ point: b, width: 50, height: 15 }, { point: c, width: 50, height: 15 }], [0, 1], [b, c], bounds, { near: 0 });
+    const out = placeInRings([{ point: b, width: 50, height: 15 }, { point: c, width: 50, height: 15 }], [0, 1], [b, c], bounds, { near: 0 });
     expect(out.every((o) => o !== null)).toBe(true);
     expect(overlaps(out[0]!.box, out[1]!.box)).toBe(false);
   });
@@ -137,25 +137,25 @@ describe('placeLabels', () => {
   it('does not set a name beside a point it could be taken for, and joins a distant name with a leader', () => {
     const own = disc(100, 100);
     const other = disc(170, 100);
-    const [p] = placeLabels([{ point: own, width: 50, height: 15 }], [0], [own, other], bounds);
+    const [p] = placeInRings([{ point: own, width: 50, height: 15 }], [0], [own, other], bounds);
     // Right would end 12 units from the other point: the name goes to the left instead.
     expect(p!.anchor).toBe('end');
     // Neighbours right, left, above and below: the name goes out along a diagonal, with a leader.
     const cross = [disc(200, 200), disc(220, 200), disc(180, 200), disc(200, 220), disc(200, 180)];
-    const [q] = placeLabels([{ point: cross[0], width: 40, height: 15 }], [0], cross, bounds);
+    const [q] = placeInRings([{ point: cross[0], width: 40, height: 15 }], [0], cross, bounds);
     expect(q).not.toBeNull();
     expect(q!.leaderTo).toBeDefined();
     for (const d of cross.slice(1)) expect(distanceToBox(d.x, d.y, q!.box)).toBeGreaterThan(d.r);
     // Closed in on all eight sides, even the leaders would cross a point: no name.
     const ring = [...cross, disc(215, 185), disc(185, 185), disc(215, 215), disc(185, 215)];
-    expect(placeLabels([{ point: ring[0], width: 40, height: 15 }], [0], ring, bounds)).toEqual([null]);
+    expect(placeInRings([{ point: ring[0], width: 40, height: 15 }], [0], ring, bounds)).toEqual([null]);
   });
 
   it('leaves a name out when no spot is free, and names only the points in the order', () => {
     const tight: Box = { x0: 90, y0: 90, x1: 130, y1: 110 };
     const d = disc(100, 100);
-    expect(placeLabels([{ point: d, width: 80, height: 15 }], [0], [d], tight)).toEqual([null]);
-    expect(placeLabels([{ point: d, width: 10, height: 15 }], [], [d], bounds)).toEqual([null]);
+    expect(placeInRings([{ point: d, width: 80, height: 15 }], [0], [d], tight)).toEqual([null]);
+    expect(placeInRings([{ point: d, width: 10, height: 15 }], [], [d], bounds)).toEqual([null]);
   });
 
   it('finds segments that cross boxes', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { tree, treeOptions } from '../../pipeline/charts/tree.ts';
 import { defaultTheme } from '../../pipeline/charts/theme.ts';
 import { textWidth } from '../../pipeline/charts/svg.ts';
-import { rectsOverlap } from '../../pipeline/charts/pointlabels.ts';
+import { boxOf, overlaps } from '../../pipeline/charts/labels.ts';
 import type { TreeData, TreeNode } from '../../pipeline/charts/types.ts';
 import { lockTree } from './fixtures-structure.ts';
 import { count, texts, unescapeXml } from './inspect.ts';
@@ -140,7 +140,7 @@ describe('tree: layout', () => {
       ws.forEach((a, i) => {
         expect(a.box.x).toBeGreaterThanOrEqual(0);
         expect(a.box.x + a.box.width).toBeLessThanOrEqual(width);
-        ws.slice(i + 1).forEach((b) => expect(rectsOverlap(a.box, b.box), `${a.phrase} / ${b.phrase}`).toBe(false));
+        ws.slice(i + 1).forEach((b) => expect(overlaps(boxOf(a.box), boxOf(b.box)), `${a.phrase} / ${b.phrase}`).toBe(false));
       });
     }
   });
