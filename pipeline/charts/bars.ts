@@ -8,15 +8,14 @@ import type { BarsData, DataAt, NoteAt, Table, TextAt } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
-import { decimalsFor, formatPercent, formatValue, joinWords, sentence } from './format.ts';
+import { columnKeys, decimalsFor, formatPercent, formatValue, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import type { ValueAxis } from './scale.ts';
-import { legend } from './legend.ts';
 import { thinEvenly } from './place.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
-import type { NoteAnchor } from './notes.ts';
+import { legend, markerHeight, markerWidth, noteInline, notesInLane } from './furniture.ts';
+import type { NoteAnchor } from './furniture.ts';
 
 export const barsOptions = z.strictObject({
   orientation: z
@@ -89,13 +88,11 @@ function emptyReason(data: BarsData, prep: Prepared): string | null {
 /* ---------- table and alt text ---------- */
 
 function barsTable(data: BarsData, prep: Prepared): Table {
-  const used = new Set(['category']);
-  const keys = data.series.map((s) => {
-    let key = s.id;
-    while (used.has(key)) key = `series-${key}`;
-    used.add(key);
-    return key;
-  });
+  const keys = columnKeys(
+    data.series.map((s) => s.id),
+    'category',
+    'series',
+  );
   return {
     columns: [
       { key: 'category', label: data.categoryLabel, numeric: false },
@@ -168,8 +165,7 @@ interface Target {
 /** A chapter is its bar when the bars are the chapters; a character or word, the bar named after it. */
 function inData(at: TextAt, data: BarsData): DataAt | Miss {
   if ('chapter' in at) return data.categories.includes(at.title) ? { category: at.title } : 'absent';
-  const has = namedAs(at);
-  const c = has ? data.categories.find((x) => has(x) || has(x.toLowerCase())) : undefined;
+  const c = findNamed(at, data.categories, (x) => [x, x.toLowerCase()]);
   return c !== undefined ? { category: c } : 'absent';
 }
 

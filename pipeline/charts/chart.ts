@@ -29,12 +29,12 @@
  */
 
 import { z } from 'zod';
-import type { ChartOutput, NoteAt, NoteOutcome, PinnedNote, Table } from './types.ts';
+import type { ChartOutput, DataAt, NoteAt, NoteOutcome, PinnedNote, Table, TextAt } from './types.ts';
 import { defaultTheme, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import { el, escapeXml, hashString, textEl, truncateText } from './svg.ts';
 import { upperFirst } from './format.ts';
-import { noteSentences } from './notes.ts';
+import { noteSentences } from './furniture.ts';
 
 /** One of the two layouts: the viewBox width, and whether it is the narrow one (for phones). */
 export interface Layout {
@@ -184,6 +184,35 @@ export function defineChart<D extends { kind: string; title: string }, S extends
     };
   };
   return { name: spec.name, options: spec.options, render };
+}
+
+/* ---------- reading a note's target (for the kinds' `place`) ---------- */
+
+/** Whether a target is in the dataset's own terms (rather than a chapter, character, word or segment). */
+export function isDataAt(at: NoteAt): at is DataAt {
+  return !('chapter' in at || 'character' in at || 'word' in at || 'segment' in at);
+}
+
+/**
+ * Whether a string is one of the names a target goes by, for kinds that find
+ * things by name: a character's cast id and name; a word in lower case and as
+ * typed. Null for chapters and segments, which are not found by name.
+ */
+export function namedAs(at: TextAt): ((s: string | undefined) => boolean) | null {
+  const names = 'character' in at ? [at.character, at.name] : 'word' in at ? [at.word.toLowerCase(), at.word] : null;
+  return names && ((s) => s !== undefined && names.includes(s));
+}
+
+/** The first of `items` that a character or word names, by any of the names `names` gives for an item; none for chapters and segments. */
+export function findNamed<T>(at: TextAt, items: readonly T[], names: (item: T) => readonly (string | undefined)[]): T | undefined {
+  const has = namedAs(at);
+  return has ? items.find((x) => names(x).some(has)) : undefined;
+}
+
+/** Whether `text` holds `word` (a word or phrase) as a whole word, ignoring case. */
+export function holdsWord(text: string, word: string): boolean {
+  const w = word.toLowerCase().replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+  return new RegExp(`(^|[^\\p{L}])${w}($|[^\\p{L}])`, 'iu').test(text);
 }
 
 /** The `id` option every chart kind takes. */

@@ -78,3 +78,18 @@ export function sentence(s: string): string {
   if (t === '') return t;
   return /[.!?…]$/.test(t) ? t : `${t}.`;
 }
+
+/**
+ * Column keys for a table from ids that may clash with each other or with
+ * the table's own first key: an id already taken gets `prefix` in front of it
+ * until it is free ("ada", "series-ada").
+ */
+export function columnKeys(ids: readonly string[], first: string, prefix: string): string[] {
+  const used = new Set([first]);
+  return ids.map((id) => {
+    let key = id;
+    while (used.has(key)) key = `${prefix}-${key}`;
+    used.add(key);
+    return key;
+  });
+}

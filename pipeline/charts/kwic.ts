@@ -11,12 +11,12 @@ import type { KwicData, NoteAt, Table } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, holdsWord, isDataAt, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { formatNumber, joinWords, sentence } from './format.ts';
 import { boldWidth, clipEnd, clipStart, collapseSpace } from './clip.ts';
 import { mixColour } from './colour.ts';
-import { holdsWord, isDataAt, markerWidth, noteInline } from './notes.ts';
+import { markerWidth, noteInline } from './furniture.ts';
 
 export const kwicOptions = z.strictObject({
   limit: z

@@ -10,13 +10,13 @@ import type { DataAt, LinesData, NoteAt, Table, TextAt } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, polylinePath, textEl, textWidth, titleEl, truncateText } from './svg.ts';
-import { decimalsFor, formatValue, sentence } from './format.ts';
+import { columnKeys, decimalsFor, formatValue, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
 import { spreadApart, thinEvenly } from './place.ts';
-import { isDataAt, markerHeight, namedAs, notesInLane } from './notes.ts';
-import type { NoteAnchor } from './notes.ts';
+import { markerHeight, notesInLane } from './furniture.ts';
+import type { NoteAnchor } from './furniture.ts';
 
 export const linesOptions = z.strictObject({
   markers: z
@@ -85,13 +85,11 @@ function emptyReason(data: LinesData, values: Values): string | null {
 /* ---------- table and alt text ---------- */
 
 function linesTable(data: LinesData, values: Values, bands: readonly Band[] = []): Table {
-  const used = new Set(['position']);
-  const keys = data.series.map((s) => {
-    let key = s.id;
-    while (used.has(key)) key = `series-${key}`;
-    used.add(key);
-    return key;
-  });
+  const keys = columnKeys(
+    data.series.map((s) => s.id),
+    'position',
+    'series',
+  );
   return {
     columns: [
       { key: 'position', label: data.xLabel, numeric: false },
@@ -149,8 +147,7 @@ interface Target {
 function inData(at: TextAt, data: LinesData): DataAt | Miss {
   if ('chapter' in at) return data.points[at.chapter - 1] === at.title ? { x: at.chapter - 1 } : 'absent';
   if ('segment' in at) return at.segment <= data.points.length ? { x: at.segment - 1 } : 'absent';
-  const has = namedAs(at)!;
-  const s = data.series.find((x) => has(x.id) || has(x.name));
+  const s = findNamed(at, data.series, (x) => [x.id, x.name]);
   return s ? { series: s.id } : 'absent';
 }
 

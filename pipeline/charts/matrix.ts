@@ -23,16 +23,15 @@ import type { DataAt, MatrixData, NoteAt, Table, TextAt } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
-import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
+import { columnKeys, decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import { equalClasses } from './classes.ts';
 import type { Classes } from './classes.ts';
 import { lightnessRamp, pickSteps, textOn } from './ramp.ts';
 import { seriate } from './seriate.ts';
 import { thinEvenly } from './place.ts';
-import { notesBelow } from './lanebelow.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesBelow } from './furniture.ts';
 
 export const matrixOptions = z.strictObject({
   order: z
@@ -150,13 +149,11 @@ function emptyReason(data: MatrixData, prep: Prepared): string | null {
 /* ---------- table and alt text ---------- */
 
 function matrixTable(data: MatrixData, prep: Prepared): Table {
-  const used = new Set(['row']);
-  const keys = prep.colOrder.map((c) => {
-    let key = data.columns[c].id;
-    while (used.has(key)) key = `column-${key}`;
-    used.add(key);
-    return key;
-  });
+  const keys = columnKeys(
+    prep.colOrder.map((c) => data.columns[c].id),
+    'row',
+    'column',
+  );
   return {
     columns: [
       { key: 'row', label: data.rowLabel, numeric: false },
@@ -213,8 +210,7 @@ function inData(at: TextAt, data: MatrixData): DataAt | Miss {
     const row = items.find((r) => r.name === at.title);
     return row ? { category: row.name } : 'absent';
   }
-  const has = namedAs(at);
-  const r = has ? items.find((x) => has(x.id) || has(x.name)) : undefined;
+  const r = findNamed(at, items, (x) => [x.id, x.name]);
   return r ? { category: r.name } : 'absent';
 }
 

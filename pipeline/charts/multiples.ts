@@ -11,14 +11,13 @@ import type { BarsData, DataAt, LinesData, MultiplesData, NoteAt, Table, TextAt 
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, polylinePath, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { BOLD_FACTOR } from './clip.ts';
 import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import type { ValueFormat } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
-import { legend } from './legend.ts';
-import { isDataAt, markerWidth, namedAs, noteInline } from './notes.ts';
+import { legend, markerWidth, noteInline } from './furniture.ts';
 
 export const multiplesOptions = z.strictObject({
   columns: z
@@ -176,12 +175,12 @@ function inData(at: TextAt, data: MultiplesData): DataAt | Miss {
     const panel = data.panels.find((p) => p.title === at.title);
     return panel ? { category: panel.id } : 'absent';
   }
-  const has = namedAs(at);
-  if (!has) return 'absent';
-  const own = data.panels.find((p) => has(p.id) || has(p.title));
+  const own = findNamed(at, data.panels, (p) => [p.id, p.title]);
   if (own) return { category: own.id };
   const showing = data.panels.find((p) =>
-    p.data.kind === 'bars' ? p.data.categories.some((c) => has(c) || has(c.toLowerCase())) : p.data.series.some((x) => has(x.id) || has(x.name)),
+    p.data.kind === 'bars'
+      ? findNamed(at, p.data.categories, (c) => [c, c.toLowerCase()]) !== undefined
+      : findNamed(at, p.data.series, (x) => [x.id, x.name]) !== undefined,
   );
   return showing ? { category: showing.id } : 'absent';
 }

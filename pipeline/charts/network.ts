@@ -26,7 +26,7 @@ import type { NetworkData, NoteAt, Table } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { forceLayout } from './force.ts';
@@ -34,7 +34,8 @@ import { boxOf, placeAllEightWays, placeEightWays } from './labels.ts';
 import type { Box, Disc, PositionContext, Segment } from './labels.ts';
 import { reach, shapeFor, symbol } from './shapes.ts';
 import type { Shape } from './shapes.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline } from './notes.ts';
+import { legend, markerHeight, markerWidth, noteInline } from './furniture.ts';
+import type { Block, LegendItem } from './furniture.ts';
 
 export const networkOptions = z.strictObject({
   minWeight: z
@@ -196,12 +197,7 @@ function networkAlt(data: NetworkData, prep: Prepared): string {
 
 /** A note goes beside a node: by id, then by name; a character or word, the node named after it. Chapters have no place here. */
 function place(note: NoteAt, data: NetworkData, prep: Prepared): { node: Node } | Miss {
-  let at: string | undefined;
-  if (isDataAt(note)) at = note.category;
-  else {
-    const has = namedAs(note);
-    at = has ? data.nodes.find((x) => has(x.id) || has(x.name))?.id : undefined;
-  }
+  const at = isDataAt(note) ? note.category : findNamed(note, data.nodes, (x) => [x.id, x.name])?.id;
   if (at === undefined) return 'absent';
   const node = prep.nodes.find((n) => n.id === at) ?? prep.nodes.find((n) => n.name === at);
   return node ? { node } : 'absent';
@@ -231,35 +227,16 @@ interface Drawn {
   reach: number;
 }
 
-/** Legend rows: one entry per group (symbol, colour, "Group 1"), wrapped. */
-function groupLegend(ctx: Ctx, top: number): { markup: string; height: number } {
+/** Legend rows: one entry per group (symbol, colour, "Group 1"), wrapped; none for a single group. */
+function groupLegend(ctx: Ctx, top: number): Block {
   const { prep, theme, width: W } = ctx;
-  if (prep.groups.length < 2) return { markup: '', height: 0 };
-  const fs = theme.sizes.label;
-  const lineH = fs + 10;
-  const items: string[] = [];
-  let x = PAD;
-  let row = 0;
-  for (const g of prep.groups) {
-    const label = `Group ${g.number} (${g.members.length})`;
-    const w = 16 + 6 + textWidth(label, fs);
-    if (x > PAD && x + w > W - PAD) {
-      row++;
-      x = PAD;
-    }
-    const cy = top + row * lineH + lineH / 2;
-    const colour = seriesColour(theme, g.number - 1).mark;
-    const s = symbol(shapeFor(g.number - 1), x + 8, cy, 6);
-    items.push(
-      el('g', { class: 'vt-legend-item' }, [
-        titleEl(`Group ${g.number}: ${joinWords(g.members.map((m) => m.name))}`),
-        el(s.tag, { ...s.attrs, fill: colour }),
-        textEl(label, { x: x + 22, y: cy + fs * 0.35 }),
-      ]),
-    );
-    x += w + 18;
-  }
-  return { markup: el('g', { class: 'vt-legend' }, items), height: (row + 1) * lineH };
+  const items: LegendItem[] = prep.groups.map((g) => ({
+    name: `Group ${g.number} (${g.members.length})`,
+    colour: seriesColour(theme, g.number - 1).mark,
+    symbol: (cx, cy) => symbol(shapeFor(g.number - 1), cx, cy, 6),
+    title: `Group ${g.number}: ${joinWords(g.members.map((m) => m.name))}`,
+  }));
+  return legend(prep.groups.length < 2 ? [] : items, PAD, top, W - 2 * PAD, theme, { swatch: 16, lineHeight: theme.sizes.label + 10, align: 'middle', truncate: false });
 }
 
 function drawNetwork(ctx: Ctx): { body: string; height: number } {

@@ -10,7 +10,7 @@ import type { NoteAt, ScatterData, Table } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
@@ -18,8 +18,8 @@ import { thinEvenly } from './place.ts';
 import { placeInRings } from './labels.ts';
 import { clipEnd } from './clip.ts';
 import type { Box, Disc, RingRequest, Segment } from './labels.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
-import type { NoteAnchor } from './notes.ts';
+import { legend, markerHeight, markerWidth, noteInline, notesInLane } from './furniture.ts';
+import type { Block, LegendItem, NoteAnchor } from './furniture.ts';
 
 export const scatterOptions = z.strictObject({
   labels: z
@@ -130,12 +130,7 @@ function scatterAlt(data: ScatterData, prep: Prepared, fx: (v: number) => string
  * drawn: its note goes beside the chart. Chapters have no place here.
  */
 function place(note: NoteAt, data: ScatterData, prep: Prepared): { point: Point } | Miss {
-  let c: string | undefined;
-  if (isDataAt(note)) c = note.category;
-  else {
-    const has = namedAs(note);
-    c = has ? data.points.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()))?.id : undefined;
-  }
+  const c = isDataAt(note) ? note.category : findNamed(note, data.points, (x) => [x.id, x.label, x.label.toLowerCase()])?.id;
   if (c === undefined) return 'absent';
   const point = prep.points.find((p) => p.id === c) ?? prep.points.find((p) => p.label === c);
   if (point) return { point };
@@ -200,27 +195,10 @@ function symbol(group: number, x: number, y: number, r: number): { tag: string; 
   }
 }
 
-/** Group names, each after its symbol in its colour, wrapped into rows within the width (as legend.ts lays out swatches). */
-function symbolLegend(groups: readonly string[], y: number, W: number, theme: Theme): { markup: string; height: number } {
-  const fs = theme.sizes.label;
-  const lineHeight = fs + 8;
-  const maxWidth = W - 2 * PAD;
-  const items: string[] = [];
-  let cx = PAD;
-  let row = 0;
-  groups.forEach((group, i) => {
-    const name = truncateText(group, Math.max(60, maxWidth * 0.5), fs);
-    const w = 12 + 6 + textWidth(name, fs);
-    if (cx > PAD && cx + w > PAD + maxWidth) {
-      row++;
-      cx = PAD;
-    }
-    const baseline = y + row * lineHeight + fs;
-    const s = symbol(i, cx + 6, baseline - fs * 0.35, 5);
-    items.push(el('g', { class: 'vt-legend-item' }, [el(s.tag, { ...s.attrs, fill: seriesColour(theme, i).mark }), textEl(name, { x: cx + 18, y: baseline })]));
-    cx += w + 18;
-  });
-  return { markup: el('g', { class: 'vt-legend' }, items), height: (row + 1) * lineHeight };
+/** Group names, each after its symbol in its colour, wrapped into rows within the width. */
+function symbolLegend(groups: readonly string[], y: number, W: number, theme: Theme): Block {
+  const items: LegendItem[] = groups.map((name, i) => ({ name, colour: seriesColour(theme, i).mark, symbol: (cx, cy) => symbol(i, cx, cy, 5) }));
+  return legend(items, PAD, y, W - 2 * PAD, theme);
 }
 
 interface Ctx {

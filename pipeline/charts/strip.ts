@@ -8,12 +8,12 @@ import type { DataAt, NoteAt, StripData, Table, TextAt } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { thinEvenly, thinGreedy } from './place.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
-import type { NoteAnchor } from './notes.ts';
+import { markerHeight, markerWidth, noteInline, notesInLane } from './furniture.ts';
+import type { NoteAnchor } from './furniture.ts';
 
 export const stripOptions = z.strictObject({
   counts: z
@@ -118,8 +118,7 @@ interface Target {
 function inData(at: TextAt, data: StripData): DataAt | Miss {
   if ('chapter' in at) return { x: data.boundaries[at.chapter - 1]?.at ?? 0 };
   if ('segment' in at) return at.of && at.segment <= at.of ? { x: (at.segment - 0.5) / at.of } : 'absent';
-  const has = namedAs(at)!;
-  const r = data.rows.find((x) => has(x.id) || has(x.name));
+  const r = findNamed(at, data.rows, (x) => [x.id, x.name]);
   return r ? { category: r.id } : 'absent';
 }
 

@@ -11,7 +11,7 @@ import type { NoteAt, PinnedNote, Table, TextmapData } from './types.ts';
 import { serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, holdsWord, isDataAt, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { BOLD_FACTOR, collapseSpace } from './clip.ts';
@@ -19,7 +19,7 @@ import { valueScale } from './diverging.ts';
 import type { ValueScale } from './diverging.ts';
 import { flowLines } from './flow.ts';
 import type { FlowItem } from './flow.ts';
-import { holdsWord, isDataAt, markerHeight, markerWidth, noteInline } from './notes.ts';
+import { markerHeight, markerWidth, noteInline } from './furniture.ts';
 
 export const textmapOptions = z.strictObject({
   encode: z

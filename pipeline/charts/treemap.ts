@@ -25,13 +25,12 @@ import type { NoteAt, Table, TreemapData } from './types.ts';
 import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
-import { defineChart, idOption } from './chart.ts';
+import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { decimalsFor, formatNumber, formatPercent, joinWords, sentence } from './format.ts';
 import { atLightness } from './ramp.ts';
-import { isDataAt, markerHeight, markerWidth, namedAs, noteInline, notesInLane } from './notes.ts';
-import type { NoteAnchor } from './notes.ts';
-import { notesBelow } from './lanebelow.ts';
+import { markerHeight, markerWidth, noteInline, notesBelow, notesInLane } from './furniture.ts';
+import type { NoteAnchor } from './furniture.ts';
 
 export const treemapOptions = z.strictObject({
   values: z
@@ -169,12 +168,7 @@ function treemapAlt(data: TreemapData, prep: Prepared): string {
  * beside the chart. Chapters have no place here.
  */
 function place(note: NoteAt, data: TreemapData, prep: Prepared): { cell: Cell } | Miss {
-  let at: string | undefined;
-  if (isDataAt(note)) at = note.category;
-  else {
-    const has = namedAs(note);
-    at = has ? data.items.find((x) => has(x.id) || has(x.label) || has(x.label.toLowerCase()))?.id : undefined;
-  }
+  const at = isDataAt(note) ? note.category : findNamed(note, data.items, (x) => [x.id, x.label, x.label.toLowerCase()])?.id;
   if (at === undefined) return 'absent';
   const cell = prep.cells.find((c) => c.members.some((m) => m.id === at)) ?? prep.cells.find((c) => c.members.some((m) => m.label === at));
   if (cell) return { cell };

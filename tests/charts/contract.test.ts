@@ -9,11 +9,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { defineChart, idOption } from '../../pipeline/charts/chart.ts';
+import { defineChart, idOption, isDataAt } from '../../pipeline/charts/chart.ts';
 import type { Miss } from '../../pipeline/charts/chart.ts';
 import { charts, registry } from '../../pipeline/charts/index.ts';
 import * as kinds from '../../pipeline/charts/kinds.ts';
-import { isDataAt } from '../../pipeline/charts/notes.ts';
 import { el } from '../../pipeline/charts/svg.ts';
 import type { PinnedNote } from '../../pipeline/charts/types.ts';
 import { expectChartRoot, texts } from './inspect.ts';
