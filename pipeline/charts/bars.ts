@@ -12,6 +12,7 @@ import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { columnKeys, decimalsFor, formatPercent, formatValue, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
+import { baseline, grid, valueTicks } from './axes.ts';
 import type { ValueAxis } from './scale.ts';
 import { thinEvenly } from './place.ts';
 import { legend, markerHeight, markerWidth, noteInline, notesInLane } from './furniture.ts';
@@ -252,14 +253,11 @@ function tickLabels(axis: ValueAxis, ctx: Ctx, horizontalAxis: boolean, base: nu
         8,
       )
     : axis.ticks.map((_, i) => i);
+  if (!horizontalAxis) return valueTicks(texts, axis.ticks.map((t) => axis.at(t)), base, theme);
   return el(
     'g',
-    { class: 'vt-ticks', fill: theme.inkMuted, 'font-size': theme.sizes.small, 'text-anchor': horizontalAxis ? 'middle' : 'end' },
-    keep.map((i) =>
-      horizontalAxis
-        ? textEl(texts[i], { x: axis.at(axis.ticks[i]), y: base })
-        : textEl(texts[i], { x: base, y: axis.at(axis.ticks[i]) + theme.sizes.small * 0.35 }),
-    ),
+    { class: 'vt-ticks', fill: theme.inkMuted, 'font-size': theme.sizes.small, 'text-anchor': 'middle' },
+    keep.map((i) => textEl(texts[i], { x: axis.at(axis.ticks[i]), y: base })),
   );
 }
 
@@ -313,58 +311,77 @@ function drawHorizontal(ctx: Ctx): { body: string; height: number } {
   const plotBottom = plotTop + rowH * prep.shown.length;
   const axis = valueAxis(axisValues(ctx), [plotLeft, plotRight], data.format, narrow ? 3 : 5, true, false);
 
-  parts.push(
-    el(
-      'g',
-      { class: 'vt-grid', stroke: theme.rule, 'stroke-width': 1 },
-      axis.ticks.filter((v) => v !== 0).map((v) => el('line', { x1: axis.at(v), x2: axis.at(v), y1: plotTop, y2: plotBottom })),
-    ),
-  );
+  parts.push(grid(axis.ticks.filter((v) => v !== 0).map((v) => ({ x1: axis.at(v), x2: axis.at(v), y1: plotTop, y2: plotBottom })), theme));
 
   const groups = prep.shown.map((c, r) => {
     const cy = plotTop + r * rowH + rowH / 2;
-    const g: string[] = [titleEl(groupTitle(ctx, c))];
-    g.push(textEl(labels[r], { x: labelRight, y: cy + fs * 0.35, 'text-anchor': 'end' }));
     let reach = axis.at(0);
-    for (const seg of segments(ctx, c)) {
+    const bars: Bar[] = segments(ctx, c).map((seg) => {
       const by = stacked || k === 1 ? cy - t / 2 : cy - inner / 2 + seg.s * (t + 2);
       const x0 = axis.at(Math.min(seg.from, seg.to));
       const x1 = axis.at(Math.max(seg.from, seg.to));
-      g.push(
-        el('rect', {
-          x: x0,
-          y: by,
-          width: x1 - x0,
-          height: t,
-          fill: seriesColour(theme, seg.s).mark,
-          stroke: stacked ? theme.paper : undefined,
-          'stroke-width': stacked ? 1 : undefined,
-        }),
-      );
       reach = Math.max(reach, x1);
-    }
-    for (const l of valueLabels(ctx, c)) {
+      return { x: x0, y: by, width: x1 - x0, height: t, fill: seriesColour(theme, seg.s).mark, outline: stacked ? theme.paper : undefined };
+    });
+    const values: BarValue[] = valueLabels(ctx, c).map((l) => {
       const by = l.s < 0 || k === 1 ? cy - t / 2 : cy - inner / 2 + l.s * (t + 2);
       const x = axis.at(l.s < 0 ? (l.v >= 0 ? segEnd(ctx, c, 1) : segEnd(ctx, c, -1)) : l.v);
       const text = prep.fmt(l.v);
       const right = l.v >= 0;
-      g.push(textEl(text, { x: right ? x + 4 : x - 4, y: by + t / 2 + small * 0.35, 'font-size': small, 'text-anchor': right ? 'start' : 'end' }));
       if (right) reach = Math.max(reach, x + 4 + textWidth(text, small));
-    }
+      return { text, x: right ? x + 4 : x - 4, y: by + t / 2 + small * 0.35, anchor: right ? 'start' : 'end' };
+    });
+    const notes: string[] = [];
     let nx = reach + 6;
     for (const n of notesFor(ctx, c)) {
       const w = markerWidth(n.note.label, theme);
-      g.push(noteInline(n.note, nx + w / 2, cy, theme));
+      notes.push(noteInline(n.note, nx + w / 2, cy, theme));
       nx += w + 4;
     }
-    return el('g', { class: 'vt-bar-group', 'data-category': data.categories[c] }, g);
+    const label = textEl(labels[r], { x: labelRight, y: cy + fs * 0.35, 'text-anchor': 'end' });
+    return barGroup(data.categories[c], groupTitle(ctx, c), bars, values, [label], notes, theme);
   });
   parts.push(el('g', { class: 'vt-bars' }, groups));
 
   // Axis: zero line and ticks.
-  parts.push(el('line', { class: 'vt-baseline', x1: axis.at(0), x2: axis.at(0), y1: plotTop - 2, y2: plotBottom, stroke: theme.axis, 'stroke-width': 1 }));
+  parts.push(baseline({ x1: axis.at(0), x2: axis.at(0), y1: plotTop - 2, y2: plotBottom }, theme));
   parts.push(tickLabels(axis, ctx, true, plotBottom + 6 + small));
   return { body: parts.join(''), height: plotBottom + 6 + small + PAD };
+}
+
+/** A bar as drawn: its box and colour, outlined in paper when it is one piece of a stack. */
+export interface Bar {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+  fill: string;
+  outline?: string;
+}
+
+/** A value written by its bar. */
+export interface BarValue {
+  text: string;
+  x: number;
+  y: number;
+  anchor?: 'start' | 'middle' | 'end';
+  fill?: string;
+}
+
+/**
+ * The marks of one category as one group, its tooltip first: `before` (the
+ * category's name, where it leads), the bars, the values written by them,
+ * then `after` (the name set under vertical bars, note markers). Small
+ * multiples draw their bars panels with it too.
+ */
+export function barGroup(category: string, title: string, bars: readonly Bar[], values: readonly BarValue[], before: readonly string[], after: readonly string[], theme: Theme): string {
+  return el('g', { class: 'vt-bar-group', 'data-category': category }, [
+    titleEl(title),
+    ...before,
+    ...bars.map((b) => el('rect', { x: b.x, y: b.y, width: b.width, height: b.height, fill: b.fill, stroke: b.outline, 'stroke-width': b.outline ? 1 : undefined })),
+    ...values.map((v) => textEl(v.text, { x: v.x, y: v.y, 'font-size': theme.sizes.small, 'text-anchor': v.anchor, fill: v.fill })),
+    ...after,
+  ]);
 }
 
 /** End of a stack on one side of zero (sign 1: positive values, -1: negative). */
@@ -417,13 +434,7 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
   const valueTexts = prep.shown.flatMap((c) => valueLabels(ctx, c).map((l) => prep.fmt(l.v)));
   const showValues = valueTexts.length > 0 && Math.max(...valueTexts.map((t) => textWidth(t, small))) <= pitch - 2;
 
-  parts.push(
-    el(
-      'g',
-      { class: 'vt-grid', stroke: theme.rule, 'stroke-width': 1 },
-      axis.ticks.filter((v) => v !== 0).map((v) => el('line', { x1: plotLeft, x2: plotRight, y1: axis.at(v), y2: axis.at(v) })),
-    ),
-  );
+  parts.push(grid(axis.ticks.filter((v) => v !== 0).map((v) => ({ x1: plotLeft, x2: plotRight, y1: axis.at(v), y2: axis.at(v) })), theme));
   parts.push(tickLabels(axis, ctx, false, plotLeft - 6));
 
   // Category labels: level (on up to two lines) when they all fit their band, otherwise slanted.
@@ -440,35 +451,22 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
   const anchors: NoteAnchor[] = [];
   const groups = prep.shown.map((c, i) => {
     const cx = plotLeft + band * (i + 0.5);
-    const g: string[] = [titleEl(groupTitle(ctx, c))];
     let top = axis.at(0);
-    for (const seg of segments(ctx, c)) {
+    const bars: Bar[] = segments(ctx, c).map((seg) => {
       const bx = stacked || k === 1 ? cx - bw / 2 : cx - inner / 2 + seg.s * (bw + 2);
       const y0 = axis.at(Math.max(seg.from, seg.to));
       const y1 = axis.at(Math.min(seg.from, seg.to));
-      g.push(
-        el('rect', {
-          x: bx,
-          y: y0,
-          width: bw,
-          height: y1 - y0,
-          fill: seriesColour(theme, seg.s).mark,
-          stroke: stacked ? theme.paper : undefined,
-          'stroke-width': stacked ? 1 : undefined,
-        }),
-      );
       top = Math.min(top, y0);
-    }
-    if (showValues) {
-      for (const l of valueLabels(ctx, c)) {
-        const x = l.s < 0 || k === 1 ? cx : cx - inner / 2 + l.s * (bw + 2) + bw / 2;
-        const end = axis.at(l.s < 0 ? segEnd(ctx, c, l.v >= 0 ? 1 : -1) : l.v);
-        const ly = l.v >= 0 ? end - 5 : end + small + 2;
-        g.push(textEl(prep.fmt(l.v), { x, y: ly, 'font-size': small, 'text-anchor': 'middle' }));
-        if (l.v >= 0) top = Math.min(top, ly - small);
-      }
-    }
-    g.push(
+      return { x: bx, y: y0, width: bw, height: y1 - y0, fill: seriesColour(theme, seg.s).mark, outline: stacked ? theme.paper : undefined };
+    });
+    const values: BarValue[] = (showValues ? valueLabels(ctx, c) : []).map((l) => {
+      const x = l.s < 0 || k === 1 ? cx : cx - inner / 2 + l.s * (bw + 2) + bw / 2;
+      const end = axis.at(l.s < 0 ? segEnd(ctx, c, l.v >= 0 ? 1 : -1) : l.v);
+      const ly = l.v >= 0 ? end - 5 : end + small + 2;
+      if (l.v >= 0) top = Math.min(top, ly - small);
+      return { text: prep.fmt(l.v), x, y: ly, anchor: 'middle' };
+    });
+    const name =
       level
         ? wrapped[i].map((line, li) => textEl(line, { x: cx, y: plotBottom + 6 + fs + li * lineGap, 'text-anchor': 'middle' })).join('')
         : textEl(slanted[i], {
@@ -476,13 +474,12 @@ function drawVertical(ctx: Ctx): { body: string; height: number } {
             y: plotBottom + 10,
             'text-anchor': 'end',
             transform: `rotate(-45 ${num(cx + fs * 0.3)} ${num(plotBottom + 10)})`,
-          }),
-    );
+          });
     for (const nt of notesFor(ctx, c)) anchors.push({ note: nt.note, x: cx, y: top - 4 });
-    return el('g', { class: 'vt-bar-group', 'data-category': data.categories[c] }, g);
+    return barGroup(data.categories[c], groupTitle(ctx, c), bars, values, [], [name], theme);
   });
   parts.push(el('g', { class: 'vt-bars' }, groups));
-  parts.push(el('line', { class: 'vt-baseline', x1: plotLeft, x2: plotRight, y1: axis.at(0), y2: axis.at(0), stroke: theme.axis, 'stroke-width': 1 }));
+  parts.push(baseline({ x1: plotLeft, x2: plotRight, y1: axis.at(0), y2: axis.at(0) }, theme));
   parts.push(notesInLane(anchors, laneY, plotLeft, plotRight, theme));
 
   const catY = labelsBottom + 10 + theme.sizes.axisTitle;

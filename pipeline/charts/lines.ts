@@ -14,6 +14,7 @@ import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, polylinePath, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { columnKeys, decimalsFor, formatValue, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
+import { baseline, grid, valueTicks } from './axes.ts';
 import { spreadApart, thinEvenly } from './place.ts';
 import { markerHeight, notesInLane } from './furniture.ts';
 import type { NoteAnchor } from './furniture.ts';
@@ -202,7 +203,7 @@ function markerPath(shape: number, x: number, y: number, r: number): { tag: stri
 }
 
 /** Runs of consecutive present values: the pieces a line is drawn in. */
-function runs(vs: (number | null)[]): number[][] {
+export function runs(vs: (number | null)[]): number[][] {
   const out: number[][] = [];
   let cur: number[] = [];
   vs.forEach((v, i) => {
@@ -213,6 +214,24 @@ function runs(vs: (number | null)[]): number[][] {
   });
   if (cur.length) out.push(cur);
   return out;
+}
+
+/** One piece of a series' line through `points`, in its colour; small multiples draw their lines with it too. */
+export function linePath(points: readonly (readonly [number, number])[], colour: string, width: number): string {
+  return el('path', {
+    class: 'vt-line',
+    d: polylinePath(points),
+    fill: 'none',
+    stroke: colour,
+    'stroke-width': width,
+    'stroke-linejoin': 'round',
+    'stroke-linecap': 'round',
+  });
+}
+
+/** A series' marks as one group, named by its tooltip. */
+export function seriesGroup(series: { id: string; name: string }, marks: readonly string[]): string {
+  return el('g', { class: 'vt-series', 'data-series': series.id }, [titleEl(series.name), ...marks]);
 }
 
 interface Ctx {
@@ -262,27 +281,16 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
   const xAt = (i: number) => (n === 1 ? (plotLeft + plotRight) / 2 : plotLeft + (i * (plotRight - plotLeft)) / (n - 1));
 
   // Grid and value ticks.
-  parts.push(
-    el(
-      'g',
-      { class: 'vt-grid', stroke: theme.rule, 'stroke-width': 1 },
-      axis.ticks.map((t) => el('line', { x1: plotLeft, x2: plotRight, y1: axis.at(t), y2: axis.at(t) })),
-    ),
-  );
-  parts.push(
-    el(
-      'g',
-      { class: 'vt-ticks', fill: theme.inkMuted, 'font-size': small, 'text-anchor': 'end' },
-      axis.ticks.map((t, i) => textEl(tickTexts[i], { x: plotLeft - 8, y: axis.at(t) + small * 0.35 })),
-    ),
-  );
+  const tickYs = axis.ticks.map((t) => axis.at(t));
+  parts.push(grid(tickYs.map((y) => ({ x1: plotLeft, x2: plotRight, y1: y, y2: y })), theme));
+  parts.push(valueTicks(tickTexts, tickYs, plotLeft - 8, theme));
 
   // Position ticks, thinned evenly when crowded.
   const keep = thinEvenly(
     data.ticks.slice(0, n).map((t, i) => ({ at: xAt(i), width: textWidth(t ?? '', small) })),
     10,
   );
-  parts.push(el('line', { class: 'vt-baseline', x1: plotLeft, x2: plotRight, y1: plotBottom, y2: plotBottom, stroke: theme.axis, 'stroke-width': 1 }));
+  parts.push(baseline({ x1: plotLeft, x2: plotRight, y1: plotBottom, y2: plotBottom }, theme));
   parts.push(
     el(
       'g',
@@ -318,19 +326,7 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
         const d = `${polylinePath(pts)}L${num(pts[pts.length - 1][0])},${num(zeroY)}L${num(pts[0][0])},${num(zeroY)}Z`;
         g.push(el('path', { class: 'vt-area', d, fill: colour.mark, 'fill-opacity': 0.12, stroke: 'none' }));
       }
-      if (pts.length > 1) {
-        g.push(
-          el('path', {
-            class: 'vt-line',
-            d: polylinePath(pts),
-            fill: 'none',
-            stroke: colour.mark,
-            'stroke-width': 2,
-            'stroke-linejoin': 'round',
-            'stroke-linecap': 'round',
-          }),
-        );
-      }
+      if (pts.length > 1) g.push(linePath(pts, colour.mark, 2));
     }
     const showMarkers = markersFit || runs(vs).some((r) => r.length === 1);
     if (showMarkers) {
@@ -343,7 +339,7 @@ function drawLines(ctx: Ctx): { body: string; height: number } {
       });
       g.push(el('g', { class: 'vt-markers', fill: colour.mark, stroke: theme.paper, 'stroke-width': 1 }, marks));
     }
-    return el('g', { class: 'vt-series', 'data-series': s.id }, [titleEl(s.name), ...g]);
+    return seriesGroup(s, g);
   });
   if (ctx.bands.length) {
     const bandMarkup = ctx.bands.map((b) => {

@@ -12,12 +12,16 @@ import { seriesColour, serifStyle } from './theme.ts';
 import type { Theme } from './theme.ts';
 import type { Miss, Placed } from './chart.ts';
 import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
-import { el, polylinePath, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
+import { el, textEl, textWidth, titleEl, truncateText, wrapText } from './svg.ts';
 import { BOLD_FACTOR } from './clip.ts';
 import { decimalsFor, formatValue, joinWords, sentence } from './format.ts';
 import type { ValueFormat } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
+import { baseline, grid, valueTicks } from './axes.ts';
 import { legend, markerWidth, noteInline } from './furniture.ts';
+import { barGroup } from './bars.ts';
+import type { Bar, BarValue } from './bars.ts';
+import { linePath, runs, seriesGroup } from './lines.ts';
 
 export const multiplesOptions = z.strictObject({
   columns: z
@@ -356,23 +360,10 @@ function drawLinesPanel(
   const n = p.labels.length;
   const xAt = (i: number) => (n === 1 ? (left + right) / 2 : left + (i * (right - left)) / (n - 1));
   const out: string[] = [];
-  out.push(
-    el(
-      'g',
-      { class: 'vt-grid', stroke: theme.rule, 'stroke-width': 1 },
-      axis.ticks.map((t) => el('line', { x1: g.x, x2: g.x + g.w, y1: yAt(t), y2: yAt(t) })),
-    ),
-  );
-  if (g.col === 0) {
-    out.push(
-      el(
-        'g',
-        { class: 'vt-ticks', fill: theme.inkMuted, 'font-size': small, 'text-anchor': 'end' },
-        axis.ticks.map((t, i) => textEl(tickTexts[i], { x: g.x - 6, y: yAt(t) + small * 0.35 })),
-      ),
-    );
-  }
-  out.push(el('line', { class: 'vt-baseline', x1: g.x, x2: g.x + g.w, y1: bottom, y2: bottom, stroke: theme.axis, 'stroke-width': 1 }));
+  const tickYs = axis.ticks.map(yAt);
+  out.push(grid(tickYs.map((y) => ({ x1: g.x, x2: g.x + g.w, y1: y, y2: y })), theme));
+  if (g.col === 0) out.push(valueTicks(tickTexts, tickYs, g.x - 6, theme));
+  out.push(baseline({ x1: g.x, x2: g.x + g.w, y1: bottom, y2: bottom }, theme));
 
   // First and last position under the panel.
   const ticks = data.ticks ?? [];
@@ -391,34 +382,17 @@ function drawLinesPanel(
   data.series.forEach((s, si) => {
     const colour = seriesColour(theme, ctx.colourOf.get(s.id) ?? 0).mark;
     const vs = p.values[si];
-    const runs: number[][] = [];
-    vs.forEach((v, i) => {
-      if (v === null) return;
-      if (i > 0 && vs[i - 1] !== null && runs.length) runs[runs.length - 1].push(i);
-      else runs.push([i]);
-    });
-    const marks: string[] = [titleEl(s.name)];
-    for (const run of runs) {
-      if (run.length > 1) {
-        marks.push(
-          el('path', {
-            class: 'vt-line',
-            d: polylinePath(run.map((i) => [xAt(i), yAt(vs[i] as number)] as [number, number])),
-            fill: 'none',
-            stroke: colour,
-            'stroke-width': 1.75,
-            'stroke-linejoin': 'round',
-            'stroke-linecap': 'round',
-          }),
-        );
-      } else marks.push(el('circle', { cx: xAt(run[0]), cy: yAt(vs[run[0]] as number), r: 2.5, fill: colour }));
+    const marks: string[] = [];
+    for (const run of runs(vs)) {
+      if (run.length > 1) marks.push(linePath(run.map((i) => [xAt(i), yAt(vs[i] as number)] as [number, number]), colour, 1.75));
+      else marks.push(el('circle', { cx: xAt(run[0]), cy: yAt(vs[run[0]] as number), r: 2.5, fill: colour }));
     }
     if (peak && peak.s === si) {
       marks.push(
         el('circle', { class: 'vt-peak', cx: xAt(peak.i), cy: yAt(peak.v), r: 3.5, fill: colour, stroke: theme.paper, 'stroke-width': 1 }, titleEl(`${p.title}: highest ${peakWords(peak, ctx.fmt)}`)),
       );
     }
-    out.push(el('g', { class: 'vt-series', 'data-series': s.id }, marks));
+    out.push(seriesGroup(s, marks));
   });
   return out.join('');
 }
@@ -459,23 +433,26 @@ function drawBarsPanel(ctx: Ctx, p: Panel, g: Geometry, top: number, rowH: numbe
   p.labels.forEach((c, i) => {
     const rowTop = top + i * rowH;
     const cy = rowTop + rowH / 2;
-    const parts: string[] = [];
-    const values = data.series.map((s, si) => `${k > 1 ? `${s.name}: ` : ''}${p.values[si][i] === null ? 'no value' : ctx.fmt(p, p.values[si][i] as number)}`);
-    parts.push(titleEl(`${p.title}, ${c}: ${values.join('; ')}`));
-    if (own) parts.push(textEl(own[i], { x: x0 - 6, y: cy + fs * 0.35, 'text-anchor': 'end' }));
-    else if (sharedNames && g.col === 0) parts.push(textEl(sharedNames[i], { x: g.x - 8, y: cy + fs * 0.35, 'text-anchor': 'end' }));
+    const texts = data.series.map((s, si) => `${k > 1 ? `${s.name}: ` : ''}${p.values[si][i] === null ? 'no value' : ctx.fmt(p, p.values[si][i] as number)}`);
+    const name = own
+      ? [textEl(own[i], { x: x0 - 6, y: cy + fs * 0.35, 'text-anchor': 'end' })]
+      : sharedNames && g.col === 0
+        ? [textEl(sharedNames[i], { x: g.x - 8, y: cy + fs * 0.35, 'text-anchor': 'end' })]
+        : [];
+    const bars: Bar[] = [];
+    const values: BarValue[] = [];
     data.series.forEach((s, si) => {
       const v = p.values[si][i];
       if (v === null) return;
       const by = k > 1 ? cy - (k * (t + 1)) / 2 + si * (t + 1) : cy - t / 2;
       const a = xAt(Math.min(0, v));
       const b = xAt(Math.max(0, v));
-      parts.push(el('rect', { x: a, y: by, width: Math.max(0, b - a), height: t, fill: seriesColour(theme, ctx.colourOf.get(s.id) ?? 0).mark }));
-      if (k === 1) parts.push(textEl(ctx.fmt(p, v), { x: Math.max(b, xAt(0)) + 4, y: cy + small * 0.35, 'font-size': small, fill: theme.inkMuted }));
+      bars.push({ x: a, y: by, width: Math.max(0, b - a), height: t, fill: seriesColour(theme, ctx.colourOf.get(s.id) ?? 0).mark });
+      if (k === 1) values.push({ text: ctx.fmt(p, v), x: Math.max(b, xAt(0)) + 4, y: cy + small * 0.35, fill: theme.inkMuted });
     });
-    out.push(el('g', { class: 'vt-bar-group', 'data-category': c }, parts));
+    out.push(barGroup(c, `${p.title}, ${c}: ${texts.join('; ')}`, bars, values, name, [], theme));
   });
-  out.push(el('line', { class: 'vt-baseline', x1: xAt(0), x2: xAt(0), y1: top - 2, y2: top + p.labels.length * rowH, stroke: theme.axis, 'stroke-width': 1 }));
+  out.push(baseline({ x1: xAt(0), x2: xAt(0), y1: top - 2, y2: top + p.labels.length * rowH }, theme));
   return out.join('');
 }
 

@@ -14,6 +14,7 @@ import { defineChart, findNamed, isDataAt, idOption } from './chart.ts';
 import { el, num, textEl, textWidth, titleEl, truncateText } from './svg.ts';
 import { decimalsFor, formatNumber, joinWords, sentence } from './format.ts';
 import { tickFormatter, valueAxis } from './scale.ts';
+import { grid, valueTicks } from './axes.ts';
 import { thinEvenly } from './place.ts';
 import { placeInRings } from './labels.ts';
 import { clipEnd } from './clip.ts';
@@ -249,19 +250,17 @@ function drawScatter(ctx: Ctx, lane: boolean): { body: string; height: number; u
   const xAxis = valueAxis(xs, [plotLeft, plotRight], 'decimal', narrow ? 4 : 6, opts.zero);
   const xTicks = xAxis.ticks.map(tickFormatter(xAxis.ticks, 'decimal'));
 
+  const yTickYs = yAxis.ticks.map((t) => yAxis.at(t));
   parts.push(
-    el('g', { class: 'vt-grid', stroke: theme.rule, 'stroke-width': 1 }, [
-      ...yAxis.ticks.map((t) => el('line', { x1: plotLeft, x2: plotRight, y1: yAxis.at(t), y2: yAxis.at(t) })),
-      ...xAxis.ticks.map((t) => el('line', { x1: xAxis.at(t), x2: xAxis.at(t), y1: plotTop, y2: plotBottom })),
-    ]),
-  );
-  parts.push(
-    el(
-      'g',
-      { class: 'vt-ticks', fill: theme.inkMuted, 'font-size': small, 'text-anchor': 'end' },
-      yAxis.ticks.map((t, i) => textEl(yTicks[i], { x: plotLeft - 8, y: yAxis.at(t) + small * 0.35 })),
+    grid(
+      [
+        ...yTickYs.map((y) => ({ x1: plotLeft, x2: plotRight, y1: y, y2: y })),
+        ...xAxis.ticks.map((t) => ({ x1: xAxis.at(t), x2: xAxis.at(t), y1: plotTop, y2: plotBottom })),
+      ],
+      theme,
     ),
   );
+  parts.push(valueTicks(yTicks, yTickYs, plotLeft - 8, theme));
   const keep = thinEvenly(
     xAxis.ticks.map((t, i) => ({ at: xAxis.at(t), width: textWidth(xTicks[i], small) })),
     10,
