@@ -48,7 +48,6 @@ export const barsOptions = z.strictObject({
 });
 
 export type BarsOptions = z.output<typeof barsOptions>;
-export type BarsOptionsInput = z.input<typeof barsOptions>;
 
 /** The data made safe to draw: missing or non-finite values become null, categories ordered. */
 interface Prepared {

@@ -36,7 +36,6 @@ export const kwicOptions = z.strictObject({
 });
 
 export type KwicOptions = z.output<typeof kwicOptions>;
-export type KwicOptionsInput = z.input<typeof kwicOptions>;
 
 interface Line {
   /** Index in the data. */

@@ -36,7 +36,6 @@ export const linesOptions = z.strictObject({
 });
 
 export type LinesOptions = z.output<typeof linesOptions>;
-export type LinesOptionsInput = z.input<typeof linesOptions>;
 
 type Values = (number | null)[][];
 

@@ -54,7 +54,6 @@ export const matrixOptions = z.strictObject({
 });
 
 export type MatrixOptions = z.output<typeof matrixOptions>;
-export type MatrixOptionsInput = z.input<typeof matrixOptions>;
 
 /** Most colour classes; the ramp has this many steps. */
 const MAX_CLASSES = 7;

@@ -38,7 +38,6 @@ export const multiplesOptions = z.strictObject({
 });
 
 export type MultiplesOptions = z.output<typeof multiplesOptions>;
-export type MultiplesOptionsInput = z.input<typeof multiplesOptions>;
 
 type Values = (number | null)[][];
 

@@ -54,7 +54,6 @@ export const networkOptions = z.strictObject({
 });
 
 export type NetworkOptions = z.output<typeof networkOptions>;
-export type NetworkOptionsInput = z.input<typeof networkOptions>;
 
 interface Node {
   id: string;

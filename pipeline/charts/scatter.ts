@@ -37,7 +37,6 @@ export const scatterOptions = z.strictObject({
 });
 
 export type ScatterOptions = z.output<typeof scatterOptions>;
-export type ScatterOptionsInput = z.input<typeof scatterOptions>;
 
 interface Point {
   /** Index in the data. */

@@ -24,7 +24,6 @@ export const stripOptions = z.strictObject({
 });
 
 export type StripOptions = z.output<typeof stripOptions>;
-export type StripOptionsInput = z.input<typeof stripOptions>;
 
 interface Row {
   id: string;

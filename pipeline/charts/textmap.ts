@@ -39,7 +39,6 @@ export const textmapOptions = z.strictObject({
 });
 
 export type TextmapOptions = z.output<typeof textmapOptions>;
-export type TextmapOptionsInput = z.input<typeof textmapOptions>;
 
 interface Span {
   text: string;

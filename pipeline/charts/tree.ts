@@ -64,7 +64,6 @@ export const treeOptions = z.strictObject({
 });
 
 export type TreeOptions = z.output<typeof treeOptions>;
-export type TreeOptionsInput = z.input<typeof treeOptions>;
 
 /** A branch kept after pruning by depth and minCount. */
 interface Branch {

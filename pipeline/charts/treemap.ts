@@ -48,7 +48,6 @@ export const treemapOptions = z.strictObject({
 });
 
 export type TreemapOptions = z.output<typeof treemapOptions>;
-export type TreemapOptionsInput = z.input<typeof treemapOptions>;
 
 /** Lightness L* and most chroma C* of a group's band and of its items' rectangles (see ramp.ts). */
 const GROUP_TINT = { l: 82, c: 32 };

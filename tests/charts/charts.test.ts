@@ -8,11 +8,8 @@ import { charts } from '../../pipeline/charts/index.ts';
 import type { ChartOutput } from '../../pipeline/charts/types.ts';
 import { defaultTheme } from '../../pipeline/charts/theme.ts';
 import { arcLines, mentionsBars, mentionsByPartBars, notes, presenceStrip, stripNotes } from './fixtures.ts';
-import { count, expectChartRoot, fontSizes, textFills, texts, titles } from './inspect.ts';
-import { wellFormednessProblems } from './xml.ts';
-
-const HOSTILE = '<script>alert(1)</script>';
-const AMP = '"&amp;';
+import { texts, titles } from './inspect.ts';
+import { AMP, HOSTILE, checkDeterminism, checkEmpty, checkEscaping, checkRoot, checkType } from './kind-checks.ts';
 
 const cases: { kind: 'bars' | 'lines' | 'strip'; title: string; render: () => ChartOutput }[] = [
   { kind: 'bars', title: mentionsBars.title, render: () => charts.bars.render(mentionsBars, {}, defaultTheme, notes) },
@@ -31,45 +28,9 @@ describe('every chart kind', () => {
 
   for (const c of cases) {
     describe(`${c.kind}: ${c.title}`, () => {
-      it('writes the root, title, desc and one root group', () => {
-        const out = c.render();
-        const wide = expectChartRoot(out.svg, c.kind, c.title, out.alt);
-        const narrow = expectChartRoot(out.svgNarrow!, c.kind, c.title, out.alt);
-        expect(wide).not.toBe(narrow);
-        expect(out.svg).toMatch(/viewBox="0 0 720 \d+"/);
-        expect(out.svgNarrow).toMatch(/viewBox="0 0 360 \d+"/);
-      });
-
-      it('is deterministic', () => {
-        const a = c.render();
-        charts.bars.render(mentionsBars); // unrelated work in between
-        const b = c.render();
-        expect(b.svg).toBe(a.svg);
-        expect(b.svgNarrow).toBe(a.svgNarrow);
-        expect(b.alt).toBe(a.alt);
-        expect(b.table).toEqual(a.table);
-      });
-
-      it('sets no text under 13 units and fonts as stacks with fallbacks', () => {
-        const out = c.render();
-        for (const svg of [out.svg, out.svgNarrow!]) {
-          const sizes = fontSizes(svg);
-          expect(sizes.length).toBeGreaterThan(0);
-          expect(Math.min(...sizes)).toBeGreaterThanOrEqual(13);
-          expect(svg).toContain('font-family:var(--vt-sans, ');
-          expect(svg).toContain('font-family:var(--vt-serif, ');
-        }
-      });
-
-      it('colours text only in colours that pass 4.5:1', () => {
-        const out = c.render();
-        const allowed = new Set([defaultTheme.ink, defaultTheme.inkMuted, defaultTheme.paper, ...defaultTheme.series.map((s) => s.text)]);
-        for (const svg of [out.svg, out.svgNarrow!]) {
-          const fills = textFills(svg);
-          expect(fills.length).toBe(texts(svg).length);
-          for (const f of fills) expect(allowed.has(f), f).toBe(true);
-        }
-      });
+      checkRoot(c.kind, c.title, c.render);
+      checkDeterminism(c.render, () => charts.bars.render(mentionsBars)); // unrelated work in between
+      checkType(c.render);
     });
   }
 
@@ -117,18 +78,7 @@ describe('escaping', () => {
     ),
   ];
 
-  it('never lets markup through', () => {
-    for (const out of hostile) {
-      for (const svg of [out.svg, out.svgNarrow!]) {
-        expect(wellFormednessProblems(svg)).toEqual([]);
-        expect(svg).not.toMatch(/<script/i);
-        expect(svg).toContain('&lt;script&gt;');
-        expect(svg).toContain('&quot;&amp;amp;');
-        // Every "<" opens a tag, every ">" closes one: the counts agree.
-        expect(count(svg, '<')).toBe(count(svg, '>'));
-      }
-    }
-  });
+  checkEscaping(() => hostile);
 
   it('shows the original characters once parsed', () => {
     const out = hostile[0];
@@ -150,15 +100,7 @@ describe('empty data', () => {
     ['strip without rows', () => charts.strip.render({ ...presenceStrip, rows: [] })],
     ['strip without occurrences', () => charts.strip.render({ ...presenceStrip, rows: presenceStrip.rows.map((r) => ({ ...r, positions: [] })) })],
   ];
-  for (const [name, render] of empties) {
-    it(`says there is nothing to draw: ${name}`, () => {
-      const out = render();
-      expect(out.alt).toMatch(/^No data to draw: /);
-      expect(texts(out.svg)).toContain('No data to draw');
-      expect(wellFormednessProblems(out.svg)).toEqual([]);
-      expect(wellFormednessProblems(out.svgNarrow!)).toEqual([]);
-    });
-  }
+  checkEmpty(empties);
 });
 
 describe('options', () => {

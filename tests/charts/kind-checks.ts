@@ -1,7 +1,8 @@
 /**
  * The promises every chart kind keeps, as reusable checks for one kind's
  * test file: root structure, same bytes twice, escaping, legible and
- * high-contrast type, the empty state and strict, documented options.
+ * high-contrast type, the empty state and strict, documented options
+ * (`commonChecks` runs the first three together).
  */
 
 import { expect, it } from 'vitest';
@@ -64,33 +65,45 @@ export function checkType(render: () => ChartOutput, serif = true): void {
   });
 }
 
+/** Hostile strings come out escaped: well-formed XML, no live markup, the characters shown as typed. */
+export function expectEscaped(out: ChartOutput): void {
+  for (const svg of [out.svg, out.svgNarrow]) {
+    // Source: XML 1.0 (5th ed.), §2.1 well-formed documents, §4.6 predefined entities.
+    expect(wellFormednessProblems(svg)).toEqual([]);
+    expect(svg).not.toMatch(/<script/i);
+    expect(svg).toContain('&lt;script&gt;');
+    expect(svg).toContain('&quot;&amp;amp;');
+    // Every "<" opens a tag, every ">" closes one: the counts agree.
+    expect(count(svg, '<')).toBe(count(svg, '>'));
+  }
+}
+
 /** Hostile strings arrive escaped, and read back as they were. */
 export function checkEscaping(outputs: () => ChartOutput[]): void {
   it('never lets markup through', () => {
-    for (const out of outputs()) {
-      for (const svg of [out.svg, out.svgNarrow!]) {
-        expect(wellFormednessProblems(svg)).toEqual([]);
-        expect(svg).not.toMatch(/<script/i);
-        expect(svg).toContain('&lt;script&gt;');
-        expect(svg).toContain('&quot;&amp;amp;');
-        expect(count(svg, '<')).toBe(count(svg, '>'));
-      }
-    }
+    for (const out of outputs()) expectEscaped(out);
   });
+}
+
+/** The shared "No data to draw" panel, in both layouts. */
+export function expectEmpty(out: ChartOutput): void {
+  expect(out.alt).toMatch(/^No data to draw: /);
+  expect(texts(out.svg)).toContain('No data to draw');
+  expect(texts(out.svgNarrow)).toContain('No data to draw');
+  expect(wellFormednessProblems(out.svg)).toEqual([]);
+  expect(wellFormednessProblems(out.svgNarrow)).toEqual([]);
 }
 
 /** The shared "No data to draw" panel. */
 export function checkEmpty(cases: [string, () => ChartOutput][]): void {
-  for (const [name, render] of cases) {
-    it(`says there is nothing to draw: ${name}`, () => {
-      const out = render();
-      expect(out.alt).toMatch(/^No data to draw: /);
-      expect(texts(out.svg)).toContain('No data to draw');
-      expect(texts(out.svgNarrow!)).toContain('No data to draw');
-      expect(wellFormednessProblems(out.svg)).toEqual([]);
-      expect(wellFormednessProblems(out.svgNarrow!)).toEqual([]);
-    });
-  }
+  for (const [name, render] of cases) it(`says there is nothing to draw: ${name}`, () => expectEmpty(render()));
+}
+
+/** The checks every kind's own test file runs on one rendering: root and layouts, same bytes twice, legible and high-contrast type. */
+export function commonChecks(kind: string, title: string, render: () => ChartOutput): void {
+  checkRoot(kind, title, render);
+  checkDeterminism(render, () => undefined);
+  checkType(render);
 }
 
 /** Strict options, each documented with its default, defaults filled. */

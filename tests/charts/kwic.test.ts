@@ -7,7 +7,7 @@ import { textWidth } from '../../pipeline/charts/svg.ts';
 import { ledgerKwic, kwicNotes } from './fixtures-kinds.ts';
 import { count, textFills, texts, titles } from './inspect.ts';
 import { expectSvgSnapshot } from './snapshot.ts';
-import { AMP, HOSTILE, commonChecks, expectEmpty, expectEscaped } from './shared-checks.ts';
+import { AMP, HOSTILE, commonChecks, expectEmpty, expectEscaped } from './kind-checks.ts';
 
 /** Data indices of the lines drawn, in drawing order. */
 function drawnLines(svg: string): number[] {

@@ -8,7 +8,7 @@ import type { TextmapData } from '../../pipeline/charts/types.ts';
 import { floodTextmap } from './fixtures-kinds.ts';
 import { count, textFills, texts } from './inspect.ts';
 import { expectSvgSnapshot } from './snapshot.ts';
-import { AMP, HOSTILE, commonChecks, expectEmpty, expectEscaped } from './shared-checks.ts';
+import { AMP, HOSTILE, commonChecks, expectEmpty, expectEscaped } from './kind-checks.ts';
 
 const t = defaultTheme;
 
