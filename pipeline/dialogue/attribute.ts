@@ -37,7 +37,7 @@ import { buildView } from './view.ts';
 import { matchPins } from './pins.ts';
 import { buildTurns, paragraphsWithTurns, type Rule, type Turn } from './turns.ts';
 import { adjacent, recentSpeakers, sceneIndex } from './scene.ts';
-import { mayBeEpithet, namesPerson, outsiderDescription } from './refs.ts';
+import { mayBeEpithet, namesPerson, outsiderDescription, relationPronoun } from './refs.ts';
 import { asksWho } from './tags.ts';
 import { resolvePronoun } from './pronouns.ts';
 import { allowed, chains, fillable, fillRun, seed, type ChainContext } from './chains.ts';
@@ -180,6 +180,8 @@ export function analyseDialogue(input: DialogueInput): DialogueAnalysis {
       return;
     }
     if (r?.kind === 'ambiguous') t.candidates = r.candidates;
+    const kin = r ? relationPronoun(r) : null;
+    if (kin !== null) t.gender = kin; // "said his mother": a woman, whoever she is
     if (r?.kind === 'pronoun') t.pronoun = { gender: r.gender, token: t.tag!.token, continuing: CONTINUING_VERBS.has(t.tag!.verb), inTag: true };
     if (t.tag && RESUMING_VERBS.has(t.tag.verb)) t.resumes = true;
     if (t.selfNamed !== null && allowed(cast, t, t.selfNamed)) {

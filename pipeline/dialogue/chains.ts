@@ -180,7 +180,7 @@ export function fillRun(ctx: ChainContext, run: readonly number[]): void {
     // ("Tomas, take the bag up." — "Which room?"), not a name in passing ("Dunmore, his name is.").
     const known = fixedSpeaker(k);
     const s = known ?? -1;
-    const to = known !== null ? addressed(k, s) : (slots[k].map((ti) => T[ti]).find((u) => u.introduces !== null && u.vocatives.includes(u.introduces))?.introduces ?? null);
+    const to = known !== null ? addressed(k, s) : (slots[k].flatMap((ti) => T[ti].calls).find((m) => m !== s) ?? null);
     if (to !== null && fits(k + 1, to)) replies.set(k + 1, to);
   }
   const speakerOf = (k: number): number | null => fixedSpeaker(k) ?? replies.get(k) ?? null;
@@ -203,7 +203,9 @@ export function fillRun(ctx: ChainContext, run: readonly number[]): void {
     const last = T[run[run.length - 1]];
     // On stage: the narrative's subjects, then whoever spoke lately, then others named in the narrative.
     const around = [last.lastPara, last.lastPara - first.firstPara + 3, ctx.chapterStart(first.chapter)] as const;
-    const weak = [...ctx.scene.members(...around, true), ...recent, ...ctx.scene.members(...around)];
+    // Someone outside the cast who spoke lately comes last: their part in a scene is usually brief.
+    const inCast = (m: number): boolean => m < ctx.cast.length;
+    const weak = [...ctx.scene.members(...around, true), ...recent.filter(inCast), ...ctx.scene.members(...around), ...recent.filter((m) => !inCast(m))];
     const prior = frequentSpeakers(T, run[0]);
     const ok = (m: number): boolean => m !== s && !exclude.includes(m);
     // Someone who speaks in the run: the first who fits the nearest turn to fill (a clash further on ends the alternation there).

@@ -38,6 +38,9 @@ const DETERMINERS: ReadonlySet<string> = new Set([
   'poor', 'another', 'both', 'all', 'each', 'somebody', 'someone', 'everyone', 'everybody', 'nobody', 'one',
 ]);
 
+/** Indefinite pronouns that stand for a person. common practice, no source. */
+const INDEFINITES: ReadonlySet<string> = new Set(['someone', 'somebody', 'everyone', 'everybody', 'nobody', 'one', 'another']);
+
 /** Ordinals that the adverb list also holds. common practice, no source. */
 const ORDINALS: ReadonlySet<string> = new Set(['first', 'next', 'last', 'only']);
 
@@ -173,7 +176,8 @@ export function refAt(v: TokenView, cl: readonly number[], k: number, role: 'sub
       if (PHRASE_STOPS.has(wj) || (isAdverb(v, cl[j]) && !(j === k + 1 && ORDINALS.has(wj))) || v.quoteOf[cl[j]] >= 0 || verbAt(v, cl, j)) break;
       j++;
     }
-    if (j === k + 1) return null;
+    // "someone said", "nobody answered": an indefinite pronoun is a description of its own.
+    if (j === k + 1) return INDEFINITES.has(w) ? { kind: 'desc', text: surface(v, t), first: k, next: j } : null;
     return { kind: 'desc', text: cl.slice(k, j).map((x) => surface(v, x)).join(' '), first: k, next: j };
   }
   if (isCapitalised(v, t) && !NOT_NAMES.has(w)) return names(v, cl, k);
@@ -211,6 +215,23 @@ const RELATIONS: ReadonlySet<string> = new Set([
   'companion', 'partner', 'lover', 'sweetheart', 'fiance', 'fiancé', 'fiancée', 'guardian', 'ward', 'mistress', 'master',
   'brother-in-law', 'sister-in-law', 'mother-in-law', 'father-in-law', 'stepmother', 'stepfather', 'twin', 'mamma', 'papa',
 ]);
+
+/** Kin words that say who is meant is a woman or a man. common practice, no source. */
+const KIN_SHE: ReadonlySet<string> = new Set(['mother', 'sister', 'daughter', 'wife', 'aunt', 'niece', 'grandmother', 'granddaughter', 'stepmother', 'mamma', 'mother-in-law', 'sister-in-law', 'fiancée', 'mistress']);
+const KIN_HE: ReadonlySet<string> = new Set(['father', 'brother', 'son', 'husband', 'uncle', 'nephew', 'grandfather', 'grandson', 'stepfather', 'papa', 'father-in-law', 'brother-in-law', 'fiancé', 'master']);
+
+/**
+ * The pronoun a relation implies ("his mother" → she, "her brother" → he),
+ * or null: a relation may be a cast member the plan has not given the alias,
+ * but not one of the other pronoun.
+ */
+export function relationPronoun(r: Ref): 'he' | 'she' | null {
+  if (r.kind !== 'desc') return null;
+  const words = r.text.toLowerCase().split(/\s+/);
+  if (words.length < 2 || !POSSESSIVES.has(words[0])) return null;
+  const head = words[words.length - 1];
+  return KIN_SHE.has(head) ? 'she' : KIN_HE.has(head) ? 'he' : null;
+}
 
 const ARTICLES: ReadonlySet<string> = new Set(['the', 'a', 'an', 'this', 'that', 'another', 'some', 'one', 'old', 'young', 'little', 'poor']);
 const POSSESSIVES: ReadonlySet<string> = new Set(['his', 'her', 'their', 'my', 'our', 'your', 'its']);

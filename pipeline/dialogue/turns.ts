@@ -44,8 +44,10 @@ export interface Turn {
   outsider: boolean;
   /** How the text names or describes the speaker outside the cast ("the maid"), when it does. */
   outsiderName: string | null;
-  /** A cast member the turn opens by naming, as a reply to "Who are you?" would ("Lucy Venn, ma'am."), or as a call ("Tomas, take the bag up."). */
+  /** A cast member the turn opens by naming, as a reply to "Who are you?" would ("Lucy Venn, ma'am."). */
   introduces: number | null;
+  /** Cast members the turn calls by name at the opening of one of its quotations ("Tomas, take the bag up."). */
+  calls: number[];
   /** Who the speaker may be, from an ambiguous tag or beat. */
   candidates: number[] | null;
   /** The pronoun of a tag or beat that could not be resolved on its own. */
@@ -64,7 +66,7 @@ export interface Turn {
 function newTurn(q: Quote): Turn {
   return {
     quotes: [], chapter: q.chapter, firstPara: q.paragraph, lastPara: q.paragraph, tag: null, stretches: [], vocatives: [], selfNamed: null,
-    beats: [], pure: false, anchorOffset: q.open, speaker: null, rule: 'none', conf: 0, fixed: false, outsider: false, outsiderName: null, introduces: null, candidates: null,
+    beats: [], pure: false, anchorOffset: q.open, speaker: null, rule: 'none', conf: 0, fixed: false, outsider: false, outsiderName: null, introduces: null, calls: [], candidates: null,
     gender: null, pronoun: null, pinAddressee: undefined, explicitTo: null, described: false, resumes: false,
   };
 }
@@ -111,6 +113,7 @@ export function buildTurns(v: TokenView, quotes: readonly Quote[], verbs: VerbLi
     cur.lastPara = q.paragraph;
     if (!cur.tag && e.tag) cur.tag = e.tag;
     if (cur.selfNamed === null && e.self !== null) cur.selfNamed = e.self;
+    if (e.intro !== null && e.vocatives.includes(e.intro) && !cur.calls.includes(e.intro)) cur.calls.push(e.intro);
     for (const m of e.vocatives) if (!cur.vocatives.includes(m)) cur.vocatives.push(m);
     last = q;
   }

@@ -80,6 +80,17 @@ describe('speakers outside the cast', () => {
     expect(asksWho('Who told you?')).toBe(false);
   });
 
+  it('reads a relation in a tag as a person of its pronoun, not as an outsider', () => {
+    const q = quote(quotesOf(lines('Osric and Ada sat by the fire.', '“Tea?” said Osric.', '“Yes, and a slice of the cake,” said his mother.'), CAST), 'Yes, and');
+    expect(q.rule).not.toBe('outsider');
+    expect(['osric', 'hollis']).not.toContain(q.speaker);
+  });
+
+  it('lets the person called at the opening of any quotation of a turn answer it', () => {
+    const q = quotesOf(lines('The kitchen was dark and the fire was low.', '“It is late,” someone said. “Osric, go to bed.”', '“Not yet.”'), CAST);
+    expect(quote(q, 'Not yet')).toMatchObject({ speaker: 'osric', rule: 'alternation' });
+  });
+
   it('gives "I said" to the narrator the plan names, and to nobody without one', () => {
     const cast: CastMember[] = [...CAST, { id: 'hugh', name: 'Hugh Fellowes', aliases: [], pronoun: 'he' }];
     const text = lines('I had not meant to go to the fair at all.', '“You will enjoy it,” said Ada.', '“I shall enjoy nothing,” I said.', '“He will,” she said to Osric.');
