@@ -203,9 +203,17 @@ export function fillRun(ctx: ChainContext, run: readonly number[]): void {
     const last = T[run[run.length - 1]];
     // On stage: the narrative's subjects, then whoever spoke lately, then others named in the narrative.
     const around = [last.lastPara, last.lastPara - first.firstPara + 3, ctx.chapterStart(first.chapter)] as const;
-    // Someone outside the cast who spoke lately comes last: their part in a scene is usually brief.
+    // Someone outside the cast who spoke lately comes after the cast named in the narrative just before the run,
+    // and before cast members named further back: their part in a scene is usually brief.
     const inCast = (m: number): boolean => m < ctx.cast.length;
-    const weak = [...ctx.scene.members(...around, true), ...recent.filter(inCast), ...ctx.scene.members(...around), ...recent.filter((m) => !inCast(m))];
+    const justBefore = first.firstPara > ctx.chapterStart(first.chapter) ? ctx.scene.members(first.firstPara - 1, 0, ctx.chapterStart(first.chapter)) : [];
+    const weak = [
+      ...ctx.scene.members(...around, true),
+      ...recent.filter(inCast),
+      ...justBefore,
+      ...recent.filter((m) => !inCast(m)),
+      ...ctx.scene.members(...around),
+    ];
     const prior = frequentSpeakers(T, run[0]);
     const ok = (m: number): boolean => m !== s && !exclude.includes(m);
     // Someone who speaks in the run: the first who fits the nearest turn to fill (a clash further on ends the alternation there).
