@@ -52,7 +52,7 @@ const rank = (id: string): number => (id === UNKNOWN_ID ? 2 : id === OUTSIDE_ID 
 
 export const conversation: Measure<ConversationParams, ConversationResult> = {
   name: 'conversation',
-  version: 2,
+  version: 3,
   params: conversationParams,
   needsCast: true,
   compute(ctx, params) {

@@ -95,7 +95,7 @@ export interface FrequencyResult {
 
 export const frequency: Measure<FrequencyParams, FrequencyResult> = {
   name: 'frequency',
-  version: 3,
+  version: 4,
   params: frequencyParams,
   needsCast: false,
   readsCast: (p) => p.by === 'speaker',

@@ -107,7 +107,7 @@ export interface NetworkResult {
 export function createNetworkMeasure(quotes: QuoteReader): Measure<NetworkParams, NetworkResult> {
   return {
     name: 'network',
-    version: 2,
+    version: 3,
     params: networkParams,
     needsCast: true,
     compute: (ctx, params) => computeNetwork(ctx, params, quotes),

@@ -88,7 +88,7 @@ const round4 = (x: number): number => Math.round(x * 10000) / 10000;
 
 export const speech: Measure<SpeechParams, SpeechResult> = {
   name: 'speech',
-  version: 2,
+  version: 3,
   params: speechParams,
   needsCast: true,
   compute(ctx, params) {
@@ -164,7 +164,7 @@ export const speech: Measure<SpeechParams, SpeechResult> = {
     caveats: [
       'Attribution is a reading, not a fact: each quotation carries its rule and confidence, and a quotation with no sure speaker is left empty rather than guessed.',
       'Free indirect speech and speech reported without marks or dashes are not counted.',
-      'A description in a tag is taken for someone outside the cast ("said the old man"), even when it is the narrator\'s epithet for a character: give that character the description as an alias, or pin the quotation. `vitrine check` lists the outsiders heard most often. Relations ("said her mother") and descriptions that name no one ("said a voice", "the other") are not taken for outsiders; they are filled by alternation.',
+      'A description in a tag is taken for someone outside the cast ("said the old man"), even when it is the narrator\'s epithet for a character: give that character the description as an alias, or pin the quotation. `vitrine check` lists the outsiders heard most often. Relations ("said her mother", read as a woman) and descriptions that name no one ("said a voice", "the other", "someone") are not taken for outsiders; they are filled by alternation.',
       'Pronouns are resolved only to cast members, or to someone outside the cast who is named or described by a role (the postman, the maid) just before; a speaker outside the cast referred to as "she" with nothing of the kind nearby may be given to a cast member of the same pronoun.',
       'Long runs of untagged dialogue are read as two people taking turns; a third voice joining without a tag, or a speaker going on after a pause in a new paragraph, is missed.',
       'In dash dialogue a dash inside a speech is taken to start a narrative aside only when a tag or an action follows it; a tag run on after a comma ("– Yes, she said.") is read for the usual tag forms only.',
