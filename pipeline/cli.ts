@@ -55,6 +55,7 @@ Options:
   --format json|csv    Output format of \`measure\` (default: json)
   --language CODE      Language of an ad-hoc text (default: en)
   --base PATH          Serve the built site under this base path instead of the plan's
+  --cache DIR          Keep measure results in DIR (default: .vitrine/cache)
   --no-cache           Compute every measure afresh
   --quiet              Print only problems
   --help, --version
@@ -138,6 +139,7 @@ function parse(argv: string[]) {
       out: { type: 'string' },
       base: { type: 'string' },
       port: { type: 'string' },
+      cache: { type: 'string' },
       'no-cache': { type: 'boolean' },
       quiet: { type: 'boolean', short: 'q' },
       help: { type: 'boolean', short: 'h' },
@@ -154,7 +156,7 @@ function planArg(rest: string[]): string {
 }
 
 function cacheDir(values: Values): string | null {
-  return values['no-cache'] ? null : resolve(process.env.VITRINE_CACHE_DIR ?? '.vitrine/cache');
+  return values['no-cache'] ? null : resolve(values.cache ?? '.vitrine/cache');
 }
 
 function report(problems: Problem[], io: Io): void {
@@ -376,7 +378,7 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
   cleanStaleBuilds(builds, out);
   // Check everything first: a plan with problems, or an output folder that is not a build's
   // own, never reaches Astro and never touches the output folder.
-  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), log });
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), base: values.base, log });
   const problems = [...result.problems, ...checkOutputFolder(out, protectedPaths(plan, result))];
   if (hasErrors(problems)) {
     report(problems, io);
@@ -387,15 +389,14 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
   // Astro's prerender step imports packages from the build folder, so it must sit inside the
   // project (where node_modules resolves); it is moved beside the output folder afterwards.
   const work = resolve(builds, `${process.pid}-${Date.now()}`);
-  const env = { VITRINE_PLAN: plan, VITRINE_OUT_DIR: work, VITRINE_CACHE_DIR: cacheDir(values) ?? '', VITRINE_BASE: values.base ?? '' };
-  const saved = Object.fromEntries(Object.keys(env).map((k) => [k, process.env[k]]));
-  Object.assign(process.env, env);
   // Astro resolves some of its working folders from the current directory: build from the project.
   const cwd = process.cwd();
   process.chdir(ROOT);
   try {
-    const astro = await import('astro');
-    await astro.build({ root: ROOT, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
+    const [astro, { siteConfig }] = await Promise.all([import('astro'), import('../site/config.ts')]);
+    // The exhibit prepared above goes to Astro as it is: it is not prepared a second time.
+    const site = siteConfig({ root: ROOT, outDir: work, plan, prepared: result, cacheDir: cacheDir(values), base: values.base });
+    await astro.build({ ...site, configFile: false, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
     if (!existsSync(join(work, 'index.html'))) throw new Error('the site build finished without writing index.html');
     const pictures = await writeSharePictures(result.prepared!, work, cacheDir(values));
     log?.(shareSummary(pictures));
@@ -406,10 +407,6 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     return EXIT.problems;
   } finally {
     process.chdir(cwd);
-    for (const [k, v] of Object.entries(saved)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
   }
   const late = swapInto(work, out);
   if (late.length) {
@@ -437,17 +434,16 @@ function protectedPaths(plan: string, result: PrepareResult): Protected[] {
 
 async function dev(rest: string[], values: Values, io: Io): Promise<number> {
   const plan = planArg(rest);
-  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values) });
+  const result = await prepareExhibit(plan, { cacheDir: cacheDir(values), base: values.base });
   report(result.problems, io);
   if (hasErrors(result.problems)) return EXIT.problems;
-  process.env.VITRINE_PLAN = plan;
-  const c = cacheDir(values);
-  if (c) process.env.VITRINE_CACHE_DIR = c;
   const port = values.port ? Number(values.port) : 4321;
   if (!Number.isInteger(port) || port < 1 || port > 65535) throw new UsageError(`--port must be a port number, not "${values.port}"`);
   process.chdir(ROOT);
-  const astro = await import('astro');
-  const server = await astro.dev({ root: ROOT, server: { port, host: '127.0.0.1' }, logLevel: values.quiet ? 'error' : 'info' });
+  const [astro, { siteConfig }] = await Promise.all([import('astro'), import('../site/config.ts')]);
+  // The integration starts from the exhibit prepared above and prepares it again once per change.
+  const site = siteConfig({ root: ROOT, plan, prepared: result, cacheDir: cacheDir(values), base: values.base });
+  const server = await astro.dev({ ...site, configFile: false, server: { port, host: '127.0.0.1' }, logLevel: values.quiet ? 'error' : 'info' });
   io.out(`Previewing ${result.prepared!.exhibit.title} at http://127.0.0.1:${server.address.port}${result.prepared!.exhibit.base} — edits to the plan, captions and text are picked up. Ctrl+C stops.\n`);
   await new Promise<void>((done) => {
     process.once('SIGINT', done);

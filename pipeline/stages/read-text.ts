@@ -1,8 +1,7 @@
 /**
  * Reading the texts a plan names: decode, build the text model, find the cast.
  * Models are kept in memory for the life of the process, keyed by the text's
- * bytes and reading options, so the CLI and the Astro integration (which run
- * the pipeline in one process, through different module loaders) share them.
+ * bytes and reading options.
  */
 import { readFileSync } from 'node:fs';
 import { createHash } from 'node:crypto';
@@ -21,9 +20,8 @@ export interface OpenedText {
   notes: Problem[];
 }
 
-type Memo = Map<string, OpenedText>;
-const MEMO_KEY = Symbol.for('vitrine.text-models');
-const memo: Memo = ((globalThis as Record<symbol, unknown>)[MEMO_KEY] ??= new Map()) as Memo;
+/** Models built in this process, by the text's bytes, reading options and cast: the live preview reuses them across edits. */
+const memo = new Map<string, OpenedText>();
 
 /** sha256 of a file's bytes. */
 export function hashBytes(bytes: Uint8Array): string {

@@ -142,7 +142,7 @@ describe('vitrine build', () => {
     scratch.push(dir);
     out = join(dir, 'dist');
     cacheDir = join(dir, 'cache');
-    const r = vitrine(['build', 'content/exhibit.yaml', '--out', out, '--quiet'], ROOT, { VITRINE_CACHE_DIR: cacheDir });
+    const r = vitrine(['build', 'content/exhibit.yaml', '--out', out, '--quiet', '--cache', cacheDir], ROOT);
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
   });
@@ -165,7 +165,7 @@ describe('vitrine build', () => {
 
   it('draws identical SVG on a second build (determinism)', () => {
     const again = join(out, '..', 'again');
-    const r = vitrine(['build', 'content/exhibit.yaml', '--out', again, '--quiet'], ROOT, { VITRINE_CACHE_DIR: cacheDir });
+    const r = vitrine(['build', 'content/exhibit.yaml', '--out', again, '--quiet', '--cache', cacheDir], ROOT);
     expect(r.status).toBe(0);
     const svgs = (dir: string) =>
       demoPanels.map((p) => readFileSync(join(dir, p.room, p.id, 'index.html'), 'utf8').match(/<svg[\s\S]*?<\/svg>/g)!.join('\n'));
@@ -174,14 +174,14 @@ describe('vitrine build', () => {
 
   it('recomputes nothing when only a caption changed', () => {
     const { dir, plan } = copy();
-    const first = vitrine(['build', plan, '--out', join(dir, 'dist')], dir, { VITRINE_CACHE_DIR: join(dir, 'cache') });
+    const first = vitrine(['build', plan, '--out', join(dir, 'dist'), '--cache', join(dir, 'cache')], dir);
     expect(first.status).toBe(0);
     expect(first.stdout).toMatch(/[1-9]\d* computed/);
     // The build marks its folder, so the next build may replace it.
     expect(readFileSync(join(dir, 'dist', '.vitrine-build'), 'utf8')).toMatch(/^vitrine build output\n/);
     const caption = join(dir, 'content', demoPanels[0]!.caption);
     writeFileSync(caption, readFileSync(caption, 'utf8') + '\nA sentence added by the curator.\n');
-    const second = vitrine(['build', plan, '--out', join(dir, 'dist')], dir, { VITRINE_CACHE_DIR: join(dir, 'cache') });
+    const second = vitrine(['build', plan, '--out', join(dir, 'dist'), '--cache', join(dir, 'cache')], dir);
     expect(second.status).toBe(0);
     expect(second.stdout).toMatch(/ 0 computed, \d+ from the cache/);
     expect(readFileSync(join(dir, 'dist', demoPanels[0]!.room, demoPanels[0]!.id, 'index.html'), 'utf8')).toContain('A sentence added by the curator.');

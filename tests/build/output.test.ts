@@ -11,7 +11,7 @@ const scratch: string[] = [];
 afterAll(() => scratch.forEach((d) => rmSync(d, { recursive: true, force: true })));
 const cache = mkdtempSync(join(tmpdir(), 'vitrine-out-cache-'));
 scratch.push(cache);
-const env = { VITRINE_CACHE_DIR: cache };
+const withCache = ['--cache', cache];
 function copy() {
   const c = demoCopy();
   scratch.push(c.dir);
@@ -22,7 +22,7 @@ describe('vitrine build refuses an output folder that is not its own, and delete
   it('--out content: the exhibit folder', () => {
     const { dir, plan } = copy();
     const before = treeHashes(dir);
-    const r = vitrine(['build', plan, '--out', 'content'], dir, env);
+    const r = vitrine(['build', plan, '--out', 'content', ...withCache], dir);
     expect(r.status).toBe(1);
     expect(r.stderr).toMatch(/^content: the output folder is the exhibit folder, .* — build into a folder of its own with --out/m);
     expect(r.stderr).toMatch(/Nothing was built; .*content is unchanged/);
@@ -33,7 +33,7 @@ describe('vitrine build refuses an output folder that is not its own, and delete
     const { dir, plan } = copy();
     writeFileSync(join(dir, 'content', 'draft-caption-ideas.txt'), 'Ask the Circle about the ferry steps.\n');
     const before = treeHashes(dir);
-    const r = vitrine(['build', plan, '--out', '.'], join(dir, 'content'), env);
+    const r = vitrine(['build', plan, '--out', '.', ...withCache], join(dir, 'content'));
     expect(r.status).toBe(1);
     expect(r.stderr).toMatch(/^\.: the output folder is the exhibit folder/m);
     expect(treeHashes(dir)).toEqual(before);
@@ -49,7 +49,7 @@ describe('vitrine build refuses an output folder that is not its own, and delete
     const stale = join(ROOT, '.vitrine/builds', `${gone}-1700000000000`);
     mkdirSync(join(stale, '_astro'), { recursive: true });
     writeFileSync(join(stale, 'index.html'), 'half a site');
-    const r = vitrine(['build', plan, '--out', 'papers'], dir, env);
+    const r = vitrine(['build', plan, '--out', 'papers', ...withCache], dir);
     expect(r.status).toBe(1);
     expect(r.stderr).toMatch(/^papers: the output folder holds files that no Vitrine build wrote \(minutes\.txt\)/m);
     expect(treeHashes(dir)).toEqual(before);
