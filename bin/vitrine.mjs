@@ -21,6 +21,9 @@ if (!modern) {
   const r = spawnSync(pinned, [new URL(import.meta.url).pathname, ...process.argv.slice(2)], { stdio: 'inherit' });
   process.exit(r.status ?? 1);
 } else {
+  // Node keeps compiled modules (and our TypeScript with its types stripped) on disk, as
+  // Astro's and Vite's own commands do: a rebuild does not compile the same code again.
+  (await import('node:module')).enableCompileCache?.();
   const { main } = await import('../pipeline/cli.ts');
   process.exitCode = await main(process.argv.slice(2));
 }
