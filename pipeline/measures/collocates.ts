@@ -6,7 +6,7 @@ import { tScore } from '../stats/tscore.ts';
 import { logDice } from '../stats/logdice.ts';
 import { findSequence } from '../stats/sequence.ts';
 import { hasStopwords, stopwords } from '../text/stopwords.ts';
-import { phraseTypes, phraseWords } from './concordance.ts';
+import { phraseTypes, phraseWords } from '../text/phrases.ts';
 
 const SORT_KEYS = ['logDice', 'pmi', 'tScore', 'frequency'] as const;
 type SortKey = (typeof SORT_KEYS)[number];

@@ -3,7 +3,7 @@ import type { Measure } from './types.ts';
 import type { TreeData, TreeNode } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { findSequence } from '../stats/sequence.ts';
-import { phraseTypes, phraseWords } from './concordance.ts';
+import { phraseTypes, phraseWords } from '../text/phrases.ts';
 
 export const continuationsParams = z
   .object({

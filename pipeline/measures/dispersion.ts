@@ -8,8 +8,8 @@ import { entropyD2 } from '../stats/entropy-d2.ts';
 import { findSequence } from '../stats/sequence.ts';
 import { hasStopwords, stopwords } from '../text/stopwords.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
-import { segmentBounds, segmentOf } from './presence.ts';
-import { phraseTypes } from './concordance.ts';
+import { segmentBounds, segmentOf } from '../stats/windows.ts';
+import { phraseTypes } from '../text/phrases.ts';
 
 export const dispersionParams = z
   .object({

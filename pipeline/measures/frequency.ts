@@ -7,7 +7,7 @@ import { chapterTick } from '../text/labels.ts';
 import { UPOS, uposMask } from '../nlp/upos.ts';
 import { requireEnglish } from '../nlp/english.ts';
 import { tagModel } from '../nlp/tag.ts';
-import { analyseDialogue } from '../dialogue/attribute.ts';
+import { speakerOfTokens } from '../dialogue/speakers.ts';
 
 export const frequencyParams = z
   .object({
@@ -382,31 +382,6 @@ export function computeFrequency(ctx: MeasureContext, params: FrequencyParams): 
       .sort((a, b) => b.tokens - a.tokens || compare(a.id, b.id));
   }
   return result;
-}
-
-/**
- * Per token: the cast index of the speaker of the quotation it stands in, or
- * -1 (narrative, written words, a speaker unknown or outside the cast).
- * Quotations and speakers as found by the dialogue analysis.
- */
-export function speakerOfTokens({ model, cast, mentions, dialogue }: MeasureContext): Int32Array {
-  const { tokens } = model;
-  const out = new Int32Array(tokens.count).fill(-1);
-  if (!cast.length) return out;
-  const index = new Map(cast.map((c, i) => [c.id, i]));
-  for (const q of analyseDialogue({ model, cast, mentions, dialogue }).quotes) {
-    if (q.kind !== 'speech' || q.speaker === null) continue;
-    const m = index.get(q.speaker)!;
-    let lo = 0;
-    let hi = tokens.count;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (tokens.start[mid]! < q.start) lo = mid + 1;
-      else hi = mid;
-    }
-    for (let i = lo; i < tokens.count && tokens.start[i]! < q.end; i++) out[i] = m;
-  }
-  return out;
 }
 
 function compare(a: string, b: string): number {

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { Measure } from './types.ts';
 import type { BarsData, LinesData, StripData } from '../charts/types.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
+import { segmentBounds, segmentOf } from '../stats/windows.ts';
 
 export const presenceParams = z
   .object({
@@ -233,16 +234,4 @@ export const presence: Measure<PresenceParams, PresenceResult> = {
 
 function perTenThousand(n: number, tokens: number): number {
   return tokens ? Math.round((n / tokens) * 10000 * 100) / 100 : 0;
-}
-
-/** [first, end) token bounds of S equal segments of N tokens. */
-export function segmentBounds(n: number, s: number): [number, number][] {
-  const out: [number, number][] = [];
-  for (let k = 0; k < s; k++) out.push([Math.floor((k * n) / s), Math.floor(((k + 1) * n) / s)]);
-  return out;
-}
-
-/** The segment that token t falls in, consistent with segmentBounds. */
-export function segmentOf(t: number, n: number, s: number): number {
-  return Math.min(s - 1, Math.floor(((t + 1) * s - 1) / n));
 }

@@ -6,7 +6,7 @@ import { TOKEN_FLAGS } from '../text/model.ts';
 import { hasStopwords, stopwords } from '../text/stopwords.ts';
 import { requireEnglish } from '../nlp/english.ts';
 import { tagModel } from '../nlp/tag.ts';
-import { speakerOfTokens } from './frequency.ts';
+import { speakerOfTokens } from '../dialogue/speakers.ts';
 import { findPhrases, type PhraseSet } from './repetition/phrases.ts';
 import { familiesOf } from './repetition/families.ts';
 import { placesOf } from './repetition/places.ts';

@@ -73,3 +73,15 @@ export function rangeOf(ranges: readonly [number, number][], p: number): number 
   }
   return -1;
 }
+
+/** [first, end) token bounds of S equal segments of N tokens. */
+export function segmentBounds(n: number, s: number): [number, number][] {
+  const out: [number, number][] = [];
+  for (let k = 0; k < s; k++) out.push([Math.floor((k * n) / s), Math.floor(((k + 1) * n) / s)]);
+  return out;
+}
+
+/** The segment that token t falls in, consistent with segmentBounds. */
+export function segmentOf(t: number, n: number, s: number): number {
+  return Math.min(s - 1, Math.floor(((t + 1) * s - 1) / n));
+}

@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { presence, segmentBounds, segmentOf } from '../../pipeline/measures/presence.ts';
+import { presence } from '../../pipeline/measures/presence.ts';
+import { segmentBounds, segmentOf } from '../../pipeline/stats/windows.ts';
 import { context, TALE, TALE_CAST } from './fixture.ts';
 
 describe('presence', () => {
