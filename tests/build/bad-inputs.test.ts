@@ -105,7 +105,7 @@ beforeAll(async () => {
   sharedCache = mkdtempSync(join(tmpdir(), 'vitrine-bad-cache-'));
   scratch.push(sharedCache);
   const ex = demoExhibit();
-  baseline = await vitrineHere(['check', ex.plan], ex.root, { VITRINE_CACHE_DIR: sharedCache });
+  baseline = await vitrineHere(['check', ex.plan, '--cache', sharedCache], ex.root, {});
   expect(baseline.stderr).toBe('');
   expect(baseline.status).toBe(0);
 });
@@ -295,7 +295,7 @@ describe('the bad-input catalogue', () => {
     const before = treeHashes(ex.dir);
     const args = row.args?.(ex) ?? ['check', ex.plan];
     const cache = row.cache ?? 'shared';
-    const run = await vitrineHere(cache === 'none' ? [...args, '--no-cache'] : args, ex.root, { VITRINE_CACHE_DIR: cache === 'shared' ? sharedCache : undefined });
+    const run = await vitrineHere(cache === 'none' ? [...args, '--no-cache'] : cache === 'shared' ? [...args, '--cache', sharedCache] : args, ex.root, {});
     const output = `${run.stderr}\n${run.stdout}`;
     expect(output).not.toMatch(/internal error|\n\s+at .*:\d+:\d+\)?\n/);
     expect({ status: run.status, codes: run.problems.map((p) => p.code).sort() }).toEqual({ status: row.status, codes: [...row.codes].sort() });
