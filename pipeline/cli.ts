@@ -19,19 +19,11 @@ import { prepareExhibit, GENERATOR } from './exhibit.ts';
 import type { PrepareResult } from './exhibit.ts';
 import { formatProblem, hasErrors, problem, sortProblems, wording } from './problems/problem.ts';
 import type { Problem } from './problems/problem.ts';
-import { measures } from './measures/registry.ts';
 import { tableToCsv } from './stages/csv.ts';
 import { readText } from './stages/read-text.ts';
-import { basePathProblem } from './plan/schema.ts';
-import { readCastFile } from './plan/cast-file.ts';
-import { checkSettingsValue } from './plan/check-panels.ts';
-import { formatPath } from './plan/source.ts';
-import { coreKind, schemaAt } from './plan/schema-walk.ts';
 import { nearest } from './plan/suggest.ts';
 import { checkOutputFolder, cleanStaleBuilds, markBuild, swapInto } from './stages/output.ts';
 import type { Protected } from './stages/output.ts';
-import { readingProblems, readingReport } from './stages/reading.ts';
-import { shareSummary, writeSharePictures } from './stages/share.ts';
 
 export const EXIT = { ok: 0, problems: 1, usage: 2, internal: 3 } as const;
 
@@ -271,6 +263,15 @@ async function adhocMeasure(rest: string[], values: Values, format: 'json' | 'cs
   if (rest.length) throw new UsageError(`--text runs without a plan; remove "${rest.join(' ')}"`);
   const name = values.measure;
   if (!name) throw new UsageError('--text needs --measure NAME');
+  // Loaded here, not at start: a build that finds its exhibit in the cache loads no measure, schema or check.
+  const [{ measures }, { readCastFile }, { checkSettingsValue }, { formatPath }, { coreKind, schemaAt }, { readingProblems, readingReport }] = await Promise.all([
+    import('./measures/registry.ts'),
+    import('./plan/cast-file.ts'),
+    import('./plan/check-panels.ts'),
+    import('./plan/source.ts'),
+    import('./plan/schema-walk.ts'),
+    import('./stages/reading.ts'),
+  ]);
   const m = Object.hasOwn(measures, name) ? measures[name] : undefined;
   if (!m) {
     const near = nearest(name, Object.keys(measures));
@@ -367,6 +368,7 @@ function parseValue(v: string): unknown {
 async function build(rest: string[], values: Values, io: Io): Promise<number> {
   const plan = planArg(rest);
   if (values.base !== undefined) {
+    const { basePathProblem } = await import('./plan/schema.ts');
     const wrong = basePathProblem(values.base);
     if (wrong) throw new UsageError(`--base: ${wrong.message} — ${wrong.hint}`);
   }
@@ -398,6 +400,7 @@ async function build(rest: string[], values: Values, io: Io): Promise<number> {
     const site = siteConfig({ root: ROOT, outDir: work, plan, prepared: result, cacheDir: cacheDir(values), base: values.base });
     await astro.build({ ...site, configFile: false, logLevel: quiet ? 'error' : 'warn', mode: 'production' });
     if (!existsSync(join(work, 'index.html'))) throw new Error('the site build finished without writing index.html');
+    const { shareSummary, writeSharePictures } = await import('./stages/share.ts');
     const pictures = await writeSharePictures(result.prepared!, work, cacheDir(values));
     log?.(shareSummary(pictures));
     markBuild(work);

@@ -1,69 +1,40 @@
 /**
- * Preparing an exhibit, in numbered stages:
+ * Preparing an exhibit, in numbered stages, each a call into its module:
  *
- *   1. plan      load and validate the YAML plan (every problem, with file:line:col)
- *   2. texts     read each text (UTF-8 check); models are built lazily, only on a cache miss
- *   3. measures  compute each panel's measure, or take it from the cache (key: text hash,
- *                reading options, measure name + version + params, cast, language)
- *   4. notes     make each curator note exact against the text (pipeline/stages/notes.ts)
- *   5. charts    draw each panel as SVG in both layouts, with alt text and data table; the
- *                chart kind places each note once, and what it cannot draw is reported
- *   6. assemble  the PreparedExhibit the site renders (pipeline/stages/prepared.ts)
+ *   1. plan       load and validate the YAML plan (every problem, with file:line:col) → jobs
+ *                 (plan/load.ts, stages/jobs.ts)
+ *   2. texts      read each text and word list, check the dialogue pins (stages/texts.ts)
+ *   3. measures   compute each panel's measure, or take it from the cache (stages/measures.ts)
+ *   4. notes      make each curator note exact against the text, and draw each panel as SVG
+ *                 in both layouts, the chart kind placing each note (stages/notes.ts)
+ *   5. captions   check the caption files the site renders (stages/captions.ts)
+ *   6. summary    the PreparedExhibit the site renders (stages/summary.ts, stages/prepared.ts)
+ *
+ * Stages 1–4 never read a caption: their work is kept whole in the exhibit
+ * cache (stages/recall.ts) and read back when the plan, texts, word lists,
+ * options and code are unchanged, so a caption edit runs stages 5 and 6 only
+ * and loads none of the code of stages 1–4.
  *
  * Nothing here writes outside the cache folder; the site build is Astro's job.
  */
 import { readFileSync } from 'node:fs';
-import { createHash } from 'node:crypto';
-import { z } from 'zod';
-
-import { loadPlan } from './plan/load.ts';
-import type { Problem, ProblemPlace } from './problems/problem.ts';
-import { hasErrors, problem, sortProblems } from './problems/problem.ts';
-import type { ProblemArgs, ProblemCode } from './problems/catalogue.ts';
-import { planRegistry } from './stages/registry.ts';
-import { measures } from './measures/registry.ts';
-import type { DialogueSettings, Measure, MeasureContext, WordCategories } from './measures/types.ts';
-import { readLexicons } from './stages/read-lexicons.ts';
-import { checkPins } from './dialogue/pins.ts';
-import { dialogueReport, type DialogueReport } from './dialogue/report.ts';
-import { charts } from './charts/index.ts';
-import { drawPanel } from './stages/notes.ts';
-import { cacheKey, ResultCache } from './cache/cache.ts';
-import type { CacheCheck } from './cache/cache.ts';
-import { readText } from './stages/read-text.ts';
-import type { ReadText } from './stages/read-text.ts';
-import type { CastMember, HeadingReport, TextOptions, TrimmedLines } from './text/model.ts';
+import { dirname, resolve } from 'node:path';
+import type { Problem } from './problems/problem.ts';
+import { hasErrors, sortProblems } from './problems/problem.ts';
+import { ResultCache } from './cache/cache.ts';
 import type { PreparedExhibit, PreparedMethod, PreparedPanel, PreparedRoom, PreparedText } from './stages/prepared.ts';
-import type { StructureResult } from './measures/structure.ts';
-import { planJobs } from './stages/jobs.ts';
-import type { ExhibitJobs, PanelJob, TextJob, Where } from './stages/jobs.ts';
-import { paramDocs } from './stages/param-docs.ts';
-import { READING_VERSION, readingProblems, readingReport, readingReportSchema } from './stages/reading.ts';
+import type { ExhibitJobs, PanelJob } from './stages/jobs.ts';
+import type { ReadTexts, TextState } from './stages/texts.ts';
+import type { TextSummary } from './stages/text-summary.ts';
+import type { Measured } from './stages/summary.ts';
+import { assemble, captionFilesOf, GENERATOR } from './stages/summary.ts';
+import { keep, keepKey, recall, sha256 } from './stages/recall.ts';
+import { checkCaptions } from './stages/captions.ts';
+import { displayPath } from './plan/files.ts';
+import { atWhere } from './stages/where.ts';
 
-/** What stage 2 and the notes read of a cached structure result; anything else there is computed again. */
-const structureShape = z.object({
-  words: z.number(),
-  chapters: z.array(z.object({ number: z.number(), title: z.string(), part: z.string().nullable(), words: z.number() })),
-});
-
-/** A cache check from a schema: null when the value fits, otherwise where and how it does not. */
-function shapeCheck(schema: z.ZodType): CacheCheck {
-  return (value) => {
-    const r = schema.safeParse(value);
-    if (r.success) return null;
-    const issue = r.error.issues[0]!;
-    return `${issue.path.join('.') || 'the value'}: ${issue.message}`;
-  };
-}
-
-export const GENERATOR = 'Vitrine 0.1.0';
-
-const PIN_CODES = {
-  'no-match': 'dialogue/pin-no-match',
-  several: 'dialogue/pin-several',
-  'unknown-speaker': 'dialogue/pin-unknown-speaker',
-  'unknown-addressee': 'dialogue/pin-unknown-addressee',
-} as const;
+export { GENERATOR };
+export type { TextSummary };
 
 export interface PrepareOptions {
   /** Folder for cached measure results; null keeps nothing on disk. */
@@ -90,347 +61,184 @@ export interface PrepareResult {
   cache: { hits: number; misses: number };
 }
 
-export interface TextSummary {
-  id: string;
-  source: string;
-  words: number;
-  chapters: { number: number; title: string; words: number; part: string | null; line: number }[];
-  /** The headings taken and turned down, and the front and back matter trimmed (source lines). */
-  headings: HeadingReport;
-  trimmed: { front?: TrimmedLines; back?: TrimmedLines };
-  /** Stretches of the text read but outside every chapter (title page, contents, preface; source lines, inclusive). */
-  outside: { from: number; to: number }[];
-  cast: { id: string; name: string; mentions: number }[];
-  ambiguous: { text: string; chapter: number; candidates: string[] }[];
-  /** The speech marks read per chapter, and the speakers outside the cast heard most often. */
-  dialogue: Pick<DialogueReport, 'chapters' | 'outsiders'>;
-  warnings: Problem[];
-}
-
-interface TextState {
-  job: TextJob;
-  read: ReadText;
-  structure: StructureResult;
-}
-
 export async function prepareExhibit(planPath: string, opts: PrepareOptions): Promise<PrepareResult> {
   const log = opts.log ?? (() => {});
-  const cache = new ResultCache(opts.cacheDir);
   const started = performance.now();
+  const planFile = resolve(planPath);
+  const dir = dirname(planFile);
 
+  // 0. recall: stages 1–4 as kept from an earlier preparation, if nothing they read has changed.
+  const keepable = opts.cacheDir !== null && !opts.only && !opts.summarise;
+  let planBytes: Uint8Array | null = null;
+  try {
+    planBytes = readFileSync(planFile);
+  } catch {
+    // Unreadable: stage 1 says why.
+  }
+  const key = keepable && planBytes ? keepKey(planFile, planBytes, opts) : null;
+  const kept = key ? recall(opts.cacheDir!, planFile, key) : null;
+  if (kept) {
+    // 5. captions, 6. summary
+    const captionProblems = await checkCaptions(captionFilesOf(kept.measured), dir, displayPath(dir, process.cwd()));
+    let prepared: PreparedExhibit | null = null;
+    try {
+      prepared = captionProblems.length === 0 ? assemble(kept.measured, planFile, dir, opts.base) : null;
+    } catch {
+      // A kept file of the wrong shape: everything is prepared again below.
+    }
+    if (prepared) {
+      for (const t of kept.measured.texts) log(readLine(kept.measured.jobs, t));
+      const panels = kept.measured.rooms.reduce((s, r) => s + r.panels.length, 0);
+      log(`Measured ${panels} panel${panels === 1 ? '' : 's'}: 0 computed, ${panels} from the cache (${seconds(started)} s)`);
+      return {
+        prepared,
+        problems: sortProblems(kept.problems),
+        dir,
+        watch: kept.watch,
+        texts: [],
+        cache: { hits: panels, misses: 0 },
+      };
+    }
+    // A caption file went missing or moved: the full preparation below reports it in the plan.
+  }
+
+  const cache = new ResultCache(opts.cacheDir);
   // 1. plan
+  const [{ loadPlan }, { planRegistry }, { planJobs }] = await Promise.all([
+    import('./plan/load.ts'),
+    import('./stages/registry.ts'),
+    import('./stages/jobs.ts'),
+  ]);
   const loaded = await loadPlan(planPath, planRegistry());
   const problems: Problem[] = [...loaded.problems];
   const watch = [loaded.file];
-  const empty = (): PrepareResult => ({
-    prepared: null,
-    problems: sortProblems([...problems, ...cache.problems()]),
-    dir: loaded.dir,
-    watch,
-    texts: [],
-    cache: { ...cache.stats },
-  });
-  if (!loaded.plan || hasErrors(problems)) return empty();
+  const failed = (): PrepareResult => ({ prepared: null, problems: sortProblems([...problems, ...cache.problems()]), dir: loaded.dir, watch, texts: [], cache: { ...cache.stats } });
+  if (!loaded.plan || hasErrors(problems)) return failed();
   const jobs = planJobs(loaded.plan);
   // Link previews need absolute addresses: without the site's address, say what is left out.
   if (!jobs.exhibit.url) problems.push(atWhere(loaded.plan.exhibit.where, 'plan/no-url', {}));
-  watch.push(...jobs.lexicons.map((l) => l.file));
-  const language = jobs.exhibit.language;
+  watch.push(...jobs.lexicons.map((l) => l.file), ...jobs.texts.map((t) => t.file));
 
-  // 2. texts
-  const states = new Map<string, TextState>();
-  for (const t of jobs.texts) {
-    watch.push(t.file);
-    const { text, problems: textProblems } = readText(t.file, t.display, t.options, jobs.cast);
-    problems.push(...textProblems.map((p) => ({ ...p, path: p.path ?? t.where.path })));
-    if (!text) continue;
-    const structure = cache.get(
-      key(text.hash, t.options, measures.structure!, {}, jobs.cast, language),
-      () => measures.structure!.compute(contextOf(text, jobs.cast, language), {}),
-      shapeCheck(structureShape),
-    ) as StructureResult;
-    const report = cache.get(
-      cacheKey({ textHash: text.hash, textOptions: t.options, measure: 'reading', version: READING_VERSION, params: {}, cast: jobs.cast, language }),
-      () => {
-        const { model, mentions } = text.open();
-        return readingReport(model, mentions, jobs.cast);
-      },
-      shapeCheck(readingReportSchema),
-    );
-    problems.push(
-      ...readingProblems(report, {
-        id: t.id,
-        display: t.display,
-        where: t.where,
-        trimmed: t.options.start !== undefined || t.options.end !== undefined,
-        pattern: t.options.chapterPattern !== undefined,
-        cast: jobs.cast,
-        castPlaces: jobs.castPlaces,
-        language,
-      }),
-    );
-    // An empty text has nothing to check further: its pins and panels would only repeat the fault.
-    if (report.words === 0) continue;
-    states.set(t.id, { job: t, read: text, structure });
-  }
-  const lexicons = readLexicons(jobs.lexicons, problems);
-  for (const room of jobs.rooms) {
-    for (const p of room.panels) {
-      const named = p.params.lexicon;
-      if (typeof named === 'string' && !lexicons[named] && !jobs.lexicons.some((l) => l.id === named)) {
-        problems.push(atWhere({ ...p.where, path: `${p.where.path}.params.lexicon` }, 'plan/unknown-lexicon', { name: named, ids: jobs.lexicons.map((l) => l.id) }));
-      }
-    }
-  }
-  // Chapters named in dialogue.marks that the text does not have would silently set nothing.
-  for (const s of states.values()) {
-    const marks = s.job.dialogue.marks;
-    if (marks === undefined || typeof marks === 'string') continue;
-    const count = s.structure.chapters.length;
-    for (const key of Object.keys(marks.chapters ?? {})) {
-      if (Number(key) <= count) continue;
-      problems.push(
-        atWhere(
-          { ...s.job.where, path: `${s.job.where.path}.dialogue.marks.chapters["${key}"]` },
-          'dialogue/marks-chapter',
-          { chapter: key, text: s.job.display, count },
-        ),
-      );
-    }
-  }
-  // Curator pins that match no quotation would silently correct nothing.
-  for (const s of states.values()) {
-    if (s.job.dialogue.pins.length === 0) continue;
-    for (const p of checkPins(s.read.open().model, s.job.dialogue, jobs.cast)) {
-      problems.push(atWhere({ ...s.job.where, path: `${s.job.where.path}.dialogue.pins[${p.pin}]` }, PIN_CODES[p.reason], { detail: p.message }));
-    }
-  }
-  if (hasErrors(problems)) return empty();
-  for (const s of states.values()) {
-    log(`Read ${s.job.display}: ${s.structure.words.toLocaleString('en-GB')} words in ${s.structure.chapters.length} chapters`);
-  }
+  // 2. texts and pins
+  const [{ readTexts }, measuresStage, { drawPanel }, { describeTexts, summarise }, { measures }, { charts }, { paramDocs }] = await Promise.all([
+    import('./stages/texts.ts'),
+    import('./stages/measures.ts'),
+    import('./stages/notes.ts'),
+    import('./stages/summary.ts'),
+    import('./measures/registry.ts'),
+    import('./charts/index.ts'),
+    import('./stages/param-docs.ts'),
+  ]);
+  const read: ReadTexts = readTexts(jobs, cache, problems);
+  if (hasErrors(problems)) return failed();
+  const measuredTexts = describeTexts(read.states.values());
+  for (const t of measuredTexts) log(readLine(jobs, t));
 
-  // 3–5. measures, notes, charts
   const rooms: PreparedRoom[] = [];
   let computed = 0;
   for (const room of jobs.rooms) {
     const panels: PreparedPanel[] = [];
     for (const job of room.panels) {
       if (opts.only && !opts.only.includes(job.id)) continue;
-      const state = states.get(job.text)!;
-      const panel = preparePanel(job, state, jobs, cache, problems, language, lexicons);
-      if (panel) panels.push(panel.panel);
-      if (panel?.computed) computed++;
+      const state = read.states.get(job.text)!;
+      const m = measures[job.measure]!;
+      const inputs = inputsOf(state, jobs, read);
+      // 3. measures
+      const misses = cache.stats.misses;
+      let result: unknown;
+      try {
+        result = measuresStage.measure(m, job.params, inputs, cache);
+      } catch (e) {
+        problems.push(atWhere(job.measureWhere, 'panel/measure-failed', { measure: job.measure, reason: (e as Error).message }));
+        continue;
+      }
+      // 4. notes and charts: the notes made exact against the text, placed by the chart kind, what it cannot draw reported.
+      const present = (value: unknown) => {
+        const data = (m.views as Record<string, (r: unknown, p: unknown) => Parameters<typeof drawPanel>[1]>)[job.chart]!(value, job.params);
+        const facts = { chapters: state.structure.chapters, parts: state.structure.parts, cast: jobs.cast, segments: m.segments?.(job.params) };
+        return { ...drawPanel(charts[job.chart]!, data, job.options, job.notes, facts), table: m.table(value, job.params) };
+      };
+      let shown: ReturnType<typeof present>;
+      try {
+        shown = present(result);
+      } catch (e) {
+        // A result read back from the cache that the chart cannot use (an entry of the wrong
+        // shape) is computed again; a freshly computed one that fails is a fault of the program.
+        if (cache.stats.misses > misses) throw e;
+        result = measuresStage.remeasure(m, job.params, inputs, cache, `drawing it failed: ${(e as Error).message}`);
+        shown = present(result);
+      }
+      if (cache.stats.misses > misses) computed++;
+      problems.push(...shown.problems);
+      panels.push(panelOf(job, shown.out, shown.table, shown.notes, result));
     }
     rooms.push({ id: room.id, title: room.title, intro: room.intro, panels });
   }
   const panelCount = rooms.reduce((s, r) => s + r.panels.length, 0);
-  log(
-    `Measured ${panelCount} panel${panelCount === 1 ? '' : 's'}: ${computed} computed, ${panelCount - computed} from the cache (${((performance.now() - started) / 1000).toFixed(2)} s)`,
-  );
-  if (hasErrors(problems)) return empty();
+  log(`Measured ${panelCount} panel${panelCount === 1 ? '' : 's'}: ${computed} computed, ${panelCount - computed} from the cache (${seconds(started)} s)`);
+  if (hasErrors(problems)) return failed();
 
-  // 6. assemble
   const used = [...new Set(rooms.flatMap((r) => r.panels.map((p) => p.measure)))];
   const methods: PreparedMethod[] = used.map((name) => {
     const m = measures[name]!;
     return { name, version: m.version, card: m.method, params: paramDocs(m.params), credits: m.credits ?? null };
   });
-  const texts: PreparedText[] = [...states.values()].map((s) => ({
-    id: s.job.id,
-    source: s.job.source,
-    edition: s.job.edition,
-    hash: s.read.hash,
-    words: s.structure.words,
-    chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, part: c.part, words: c.words })),
-  }));
-  const captionFiles = [
-    ...new Set(
-      [jobs.exhibit.intro, jobs.exhibit.rights, ...rooms.map((r) => r.intro), ...rooms.flatMap((r) => r.panels.map((p) => p.caption))].filter(
-        (f): f is string => !!f,
-      ),
-    ),
-  ];
-  const buildHash = hashOf([readFileSync(loaded.file), ...texts.map((t) => t.hash), ...captionFiles.map((f) => readFileSync(`${loaded.dir}/${f}`))]);
-  for (const r of rooms) for (const p of r.panels) p.citation = citation(jobs, p, texts, buildHash);
-  const prepared: PreparedExhibit = {
-    exhibit: { ...jobs.exhibit, base: opts.base ?? jobs.exhibit.base },
-    texts,
-    cast: jobs.cast.map((c) => ({ id: c.id, name: c.name, aliases: c.aliases, pronoun: c.pronoun ?? null })),
-    rooms,
-    methods,
-    captionFiles,
-    buildHash,
-    generator: GENERATOR,
-  };
+  const measured: Measured = { jobs, rooms, methods, texts: measuredTexts };
+  const cacheProblems = cache.problems();
+  if (key && cacheProblems.length === 0) {
+    const inputs = [
+      ...[...read.states.values()].map((s) => ({ file: s.job.file, hash: s.read.hash })),
+      ...jobs.lexicons.map((l) => ({ file: l.file, hash: sha256(readFileSync(l.file)) })),
+    ];
+    try {
+      keep(opts.cacheDir!, planFile, { key, inputs, measured, problems, watch });
+    } catch {
+      // Not kept (a folder that turned read-only): the next build prepares everything again.
+    }
+  }
+
+  // 5. captions: checked with the plan in stage 1. 6. summary
   return {
-    prepared,
-    problems: sortProblems([...problems, ...cache.problems()]),
+    prepared: assemble(measured, loaded.file, loaded.dir, opts.base),
+    problems: sortProblems([...problems, ...cacheProblems]),
     dir: loaded.dir,
     watch,
-    texts: opts.summarise ? [...states.values()].map((s) => summarise(s, jobs.cast)) : [],
+    texts: opts.summarise ? [...read.states.values()].map((s) => summarise(s, jobs.cast)) : [],
     cache: { ...cache.stats },
   };
 }
 
-/** What a measure may read besides the text: the plan's dialogue settings and word lists. */
-export interface Extras {
-  dialogue?: DialogueSettings;
-  lexicons?: Record<string, WordCategories>;
+function inputsOf(state: TextState, jobs: ExhibitJobs, read: ReadTexts) {
+  return { text: state.read, job: state.job, cast: jobs.cast, language: jobs.exhibit.language, lexicons: read.lexicons };
 }
 
-function contextOf(text: ReadText, cast: CastMember[], language: string, extras: Extras = {}): MeasureContext {
-  const { model, mentions } = text.open();
-  return { model, mentions, cast, language, ...extras };
-}
-
-function key(hash: string, options: TextOptions, m: Measure, params: unknown, cast: CastMember[], language: string, extras: Extras = {}): string {
-  // Only what can change this measure's result is part of the key: the cast and dialogue
-  // settings for measures that read characters, the word list a parameter names.
-  const lexicon = (params as { lexicon?: unknown } | null)?.lexicon;
-  return cacheKey({
-    textHash: hash,
-    textOptions: options,
-    measure: m.name,
-    version: m.version,
-    params,
-    cast: (m.readsCast ? m.readsCast(params) : m.needsCast) ? { cast, dialogue: extras.dialogue ?? null } : null,
-    language,
-    ...(typeof lexicon === 'string' ? { lexicon: extras.lexicons?.[lexicon] ?? null } : {}),
-  });
-}
-
-/** Runs one panel's measure (or recalls it), resolves its notes and draws its chart. */
-export function computePanelResult(
-  job: PanelJob,
-  read: ReadText,
-  textOptions: TextOptions,
-  cast: CastMember[],
-  language: string,
-  cache: ResultCache,
-  extras: Extras = {},
-): unknown {
-  const m = measures[job.measure]!;
-  return cache.get(key(read.hash, textOptions, m, job.params, cast, language, extras), () =>
-    m.compute(contextOf(read, cast, language, extras), job.params),
-  );
-}
-
-function preparePanel(
-  job: PanelJob,
-  state: TextState,
-  jobs: ExhibitJobs,
-  cache: ResultCache,
-  problems: Problem[],
-  language: string,
-  lexicons: Record<string, WordCategories>,
-): { panel: PreparedPanel; computed: boolean } | null {
-  const m = measures[job.measure]!;
-  const misses = cache.stats.misses;
-  const extras: Extras = { dialogue: state.job.dialogue, lexicons };
-  const compute = () => m.compute(contextOf(state.read, jobs.cast, language, extras), job.params);
-  let result: unknown;
-  try {
-    result = computePanelResult(job, state.read, state.job.options, jobs.cast, language, cache, extras);
-  } catch (e) {
-    problems.push(atWhere(job.measureWhere, 'panel/measure-failed', { measure: job.measure, reason: (e as Error).message }));
-    return null;
-  }
-  let shown: ReturnType<typeof presentPanel>;
-  try {
-    shown = presentPanel(job, result, state, jobs.cast);
-  } catch (e) {
-    // A result read back from the cache that the chart cannot use (an entry of the wrong
-    // shape) is computed again; a freshly computed one that fails is a fault of the program.
-    if (cache.stats.misses > misses) throw e;
-    result = cache.refresh(key(state.read.hash, state.job.options, m, job.params, jobs.cast, language, extras), compute, `drawing it failed: ${(e as Error).message}`);
-    shown = presentPanel(job, result, state, jobs.cast);
-  }
-  problems.push(...shown.problems);
+function panelOf(job: PanelJob, drawn: { svg: string; svgNarrow: string | null; alt: string; summary: string }, table: PreparedPanel['table'], notes: PreparedPanel['notes'], data: unknown): PreparedPanel {
   return {
-    computed: cache.stats.misses > misses,
-    panel: {
-      id: job.id,
-      room: job.room,
-      title: job.title,
-      text: job.text,
-      measure: job.measure,
-      params: job.params,
-      chart: job.chart,
-      options: job.options,
-      svg: shown.out.svg,
-      svgNarrow: shown.out.svgNarrow,
-      alt: job.alt ?? shown.out.alt,
-      summary: job.alt ?? shown.out.summary,
-      table: shown.table,
-      notes: shown.notes,
-      caption: job.caption,
-      data: result,
-      citation: '',
-    },
+    id: job.id,
+    room: job.room,
+    title: job.title,
+    text: job.text,
+    measure: job.measure,
+    params: job.params,
+    chart: job.chart,
+    options: job.options,
+    svg: drawn.svg,
+    svgNarrow: drawn.svgNarrow,
+    alt: job.alt ?? drawn.alt,
+    summary: job.alt ?? drawn.summary,
+    table,
+    notes,
+    caption: job.caption,
+    data,
+    citation: '',
   };
 }
 
-/** The chart, table and notes of a panel from its measure's result. Throws when the result does not fit the chart. */
-function presentPanel(job: PanelJob, result: unknown, state: TextState, cast: CastMember[]) {
-  const m = measures[job.measure]!;
-  const problems: Problem[] = [];
-  const data = m.views[job.chart]!(result, job.params);
-  // 4–5. notes and chart: the notes made exact against the text, placed by the chart kind, what it cannot draw reported.
-  const segments = job.params.by === 'segment' && typeof job.params.segments === 'number' ? job.params.segments : undefined;
-  const { out, notes, problems: noteProblems } = drawPanel(charts[job.chart]!, data, job.options, job.notes, {
-    chapters: state.structure.chapters,
-    parts: state.structure.parts,
-    cast,
-    segments,
-  });
-  problems.push(...noteProblems);
-  return { out, table: m.table(result, job.params), notes, problems };
+function readLine(jobs: ExhibitJobs, t: PreparedText): string {
+  const shown = jobs.texts.find((j) => j.id === t.id)?.display ?? t.source;
+  return `Read ${shown}: ${t.words.toLocaleString('en-GB')} words in ${t.chapters.length} chapters`;
 }
 
-function atWhere<C extends ProblemCode>(where: Where, code: C, args: ProblemArgs<C>): Problem {
-  const place: ProblemPlace = { file: where.file, line: where.line, column: where.column, path: where.path };
-  return problem(code, args, place);
+function seconds(started: number): string {
+  return ((performance.now() - started) / 1000).toFixed(2);
 }
-
-function citation(jobs: ExhibitJobs, p: PreparedPanel, texts: PreparedText[], buildHash: string): string {
-  const t = texts.find((x) => x.id === p.text);
-  const edition = t?.edition ? `; ${t.edition}` : '';
-  return `${jobs.exhibit.organiser}, “${p.title}”, in ${jobs.exhibit.title} (measure: ${p.measure}${edition}). Build ${buildHash}.`;
-}
-
-function summarise(s: TextState, cast: CastMember[]): TextSummary {
-  const { model, mentions } = s.read.open();
-  const counts = new Array<number>(cast.length).fill(0);
-  for (let k = 0; k < mentions.count; k++) counts[mentions.member[k]!]!++;
-  const dialogue = dialogueReport(model, cast, mentions, s.job.dialogue);
-  return {
-    id: s.job.id,
-    source: s.job.display,
-    words: s.structure.words,
-    chapters: s.structure.chapters.map((c, i) => ({ number: c.number, title: c.title, words: c.words, part: c.part, line: model.chapters[i]?.line ?? 0 })),
-    headings: model.headings ?? { taken: [], rejected: [] },
-    trimmed: model.trimmed ?? {},
-    outside: (model.skipped ?? []).map((r) => ({ from: r.line, to: model.position(Math.max(r.start, r.end - 1)).line })),
-    cast: cast.map((c, i) => ({ id: c.id, name: c.name, mentions: counts[i]! })),
-    ambiguous: mentions.ambiguous.map((a) => ({ text: a.text, chapter: a.chapter + 1, candidates: a.candidates })),
-    dialogue: { chapters: dialogue.chapters, outsiders: dialogue.outsiders },
-    // The text model's own warnings are reported with the reading (stage 2), cache or no cache.
-    warnings: [
-      // Unbalanced quotation marks, and marks with no speech found: the rest of the text is still read.
-      // Only where dialogue is read at all (the speech measures need a cast).
-      ...(cast.length ? dialogue.warnings : []).map((q) =>
-        problem(q.code, { chapter: q.chapter, paragraph: q.paragraph, detail: q.message }, { file: s.job.display, line: q.line }),
-      ),
-    ],
-  };
-}
-
-function hashOf(parts: (string | Uint8Array)[]): string {
-  const h = createHash('sha256');
-  for (const p of parts) h.update(p);
-  return h.digest('hex').slice(0, 12);
-}
-
-
-

@@ -24,6 +24,8 @@ export interface CacheKeyParts {
   params: unknown;
   cast: unknown;
   language: string;
+  /** Anything else the result depends on (dialogue settings, a word list, data package versions). */
+  [more: string]: unknown;
 }
 
 /** Layout of an entry file; part of every key, so entries of an older layout are never read. */

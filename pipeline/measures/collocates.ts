@@ -101,6 +101,7 @@ export const collocates: Measure<CollocatesParams, CollocatesResult> = {
   version: 2,
   params: collocatesParams,
   needsCast: false,
+  reads: { data: ['stopwords-iso'] },
   compute({ model, language }, params) {
     const { tokens, vocab } = model;
     const n = tokens.count;

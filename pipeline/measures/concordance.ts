@@ -133,6 +133,7 @@ export const concordance: Measure<ConcordanceParams, ConcordanceResult> = {
   version: 1,
   params: concordanceParams,
   needsCast: false,
+  reads: {},
   compute({ model, language }, params) {
     const { tokens, chapters, text, vocab } = model;
     if (params.chapter !== undefined && params.chapter > chapters.length) {

@@ -80,6 +80,7 @@ export const continuations: Measure<ContinuationsParams, ContinuationsResult> = 
   version: 1,
   params: continuationsParams,
   needsCast: false,
+  reads: {},
   compute({ model }, params) {
     const words = phraseWords(params.phrase);
     const seq = phraseTypes(model, params.phrase);

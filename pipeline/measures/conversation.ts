@@ -55,6 +55,7 @@ export const conversation: Measure<ConversationParams, ConversationResult> = {
   version: 3,
   params: conversationParams,
   needsCast: true,
+  reads: { cast: true, dialogue: true },
   compute(ctx, params) {
     const a = analyseDialogue(ctx);
     const name = new Map(ctx.cast.map((c) => [c.id, c.name]));

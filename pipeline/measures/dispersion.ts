@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, StripData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { griesDP, griesDPnorm } from '../stats/dp.ts';
@@ -31,17 +32,7 @@ export const dispersionParams = z
       .boolean()
       .default(true)
       .describe("Leave the stopwords of the plan's language (from stopwords-iso) out when choosing the most frequent words. Default: true."),
-    by: z
-      .enum(['chapter', 'segment'])
-      .default('chapter')
-      .describe('The parts the text is divided into: its chapters, or equal segments of word positions. Default: "chapter".'),
-    segments: z
-      .number()
-      .int()
-      .min(2)
-      .max(1000)
-      .default(10)
-      .describe('How many equal segments, when `by` is "segment". Default: 10.'),
+    ...narrativeTime({ default: 'chapter', by: 'The parts the text is divided into: its chapters, or equal segments of word positions.', segmentsDefault: 10 }),
     maxPositions: z
       .number()
       .int()
@@ -137,6 +128,8 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
   version: 1,
   params: dispersionParams,
   needsCast: false,
+  reads: { data: ['stopwords-iso'] },
+  segments: segmentsOf,
   compute({ model, language }, params) {
     const { chapters, tokens } = model;
     const total = tokens.count;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, LinesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { TOKEN_FLAGS } from '../text/model.ts';
@@ -9,11 +10,7 @@ import { positionRanges } from '../stats/windows.ts';
 
 export const diversityParams = z
   .object({
-    by: z
-      .enum(['chapter', 'segment'])
-      .default('chapter')
-      .describe('Measure each chapter, or each equal segment of narrative time. Default: "chapter".'),
-    segments: z.number().int().min(2).max(1000).default(20).describe('How many equal segments, when `by` is "segment". Default: 20.'),
+    ...narrativeTime({ default: 'chapter', by: 'Measure each chapter, or each equal segment of narrative time.' }),
     score: z
       .enum(['mattr', 'mtld', 'ttr'])
       .default('mattr')
@@ -131,6 +128,8 @@ export const diversity: Measure<DiversityParams, DiversityResult> = {
   version: 1,
   params: diversityParams,
   needsCast: false,
+  reads: {},
+  segments: segmentsOf,
   compute({ model }, params) {
     return computeDiversity(model, params);
   },

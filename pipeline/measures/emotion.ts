@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Measure, WordCategories } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, LinesData, MultiplesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
@@ -15,11 +16,7 @@ export const emotionParams = z
       .array(z.string().min(1))
       .optional()
       .describe('Only these categories of the list, in this order. Default: every category, in the order the file names them.'),
-    by: z
-      .enum(['segment', 'chapter'])
-      .default('segment')
-      .describe('What the lines, small multiples and the table run along: equal segments of narrative time, or chapters. Both are always in the result. Default: "segment".'),
-    segments: z.number().int().min(2).max(1000).default(20).describe('How many equal segments of narrative time. Default: 20.'),
+    ...narrativeTime({ default: 'segment', by: 'What the lines, small multiples and the table run along: equal segments of narrative time, or chapters. Both are always in the result.', segments: 'How many equal segments of narrative time.' }),
     bars: z
       .enum(['categories', 'positions'])
       .default('categories')
@@ -164,6 +161,8 @@ export const emotion: Measure<EmotionParams, EmotionResult> = {
   version: 1,
   params: emotionParams,
   needsCast: false,
+  reads: { lexicon: (p) => p.lexicon },
+  segments: segmentsOf,
   compute({ model, lexicons }, params) {
     return computeEmotion(model, lexiconOf(lexicons, params.lexicon), params);
   },

@@ -98,7 +98,7 @@ export const frequency: Measure<FrequencyParams, FrequencyResult> = {
   version: 4,
   params: frequencyParams,
   needsCast: false,
-  readsCast: (p) => p.by === 'speaker',
+  reads: { cast: (p) => p.by === 'speaker', dialogue: (p) => p.by === 'speaker', data: ['stopwords-iso', 'wink-eng-lite-web-model'] },
   compute(ctx, params) {
     return computeFrequency(ctx, params);
   },

@@ -136,6 +136,7 @@ export const keyness: Measure<KeynessParams, KeynessResult> = {
   version: 1,
   params: keynessParams,
   needsCast: false,
+  reads: { data: ['stopwords-iso'] },
   compute({ model, language }, params) {
     const { chapters, tokens, vocab } = model;
     const targets: Chapter[] =

@@ -110,6 +110,7 @@ export function createNetworkMeasure(quotes: QuoteReader): Measure<NetworkParams
     version: 3,
     params: networkParams,
     needsCast: true,
+    reads: { cast: true, dialogue: true },
     compute: (ctx, params) => computeNetwork(ctx, params, quotes),
     method: {
       what: 'A network of the characters: two are linked each time the text names both close together (or, for conversation, each time one speaks to the other). Centralities show who holds the network together; communities group characters who mostly appear with one another.',

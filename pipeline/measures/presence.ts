@@ -1,22 +1,13 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, LinesData, StripData } from '../charts/types.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
 import { segmentBounds, segmentOf } from '../stats/windows.ts';
 
 export const presenceParams = z
   .object({
-    by: z
-      .enum(['chapter', 'segment'])
-      .default('chapter')
-      .describe('Count mentions per chapter, or per equal-width segment of narrative time (by word position). Default: "chapter".'),
-    segments: z
-      .number()
-      .int()
-      .min(2)
-      .max(1000)
-      .default(20)
-      .describe('How many equal segments, when `by` is "segment". Default: 20.'),
+    ...narrativeTime({ default: 'chapter', by: 'Count mentions per chapter, or per equal-width segment of narrative time (by word position).' }),
     rate: z
       .boolean()
       .default(false)
@@ -72,6 +63,8 @@ export const presence: Measure<PresenceParams, PresenceResult> = {
   version: 1,
   params: presenceParams,
   needsCast: true,
+  reads: { cast: true },
+  segments: segmentsOf,
   compute({ model, cast, mentions }, params) {
     const { chapters, tokens } = model;
     const total = tokens.count;

