@@ -7,16 +7,7 @@ import { ROOT } from './helpers.ts';
 // Count every preparation of the exhibit, by the command and by the Astro integration alike:
 // both reach prepareExhibit through this one module.
 const calls = vi.hoisted(() => ({ prepare: 0 }));
-vi.mock('../../pipeline/exhibit.ts', async (original) => {
-  const real = await original<typeof import('../../pipeline/exhibit.ts')>();
-  return {
-    ...real,
-    prepareExhibit: (...args: Parameters<typeof real.prepareExhibit>) => {
-      calls.prepare++;
-      return real.prepareExhibit(...args);
-    },
-  };
-});
+vi.mock('../../pipeline/exhibit.ts', async (original) => (await import('../support/prepare-count.ts')).countingExhibit(original as never, calls));
 
 const scratch = mkdtempSync(join(tmpdir(), 'vitrine-once-'));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));

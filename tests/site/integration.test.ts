@@ -5,16 +5,7 @@ import { join } from 'node:path';
 import { EventEmitter } from 'node:events';
 
 const calls = vi.hoisted(() => ({ prepare: 0 }));
-vi.mock('../../pipeline/exhibit.ts', async (original) => {
-  const real = await original<typeof import('../../pipeline/exhibit.ts')>();
-  return {
-    ...real,
-    prepareExhibit: (...args: Parameters<typeof real.prepareExhibit>) => {
-      calls.prepare++;
-      return real.prepareExhibit(...args);
-    },
-  };
-});
+vi.mock('../../pipeline/exhibit.ts', async (original) => (await import('../support/prepare-count.ts')).countingExhibit(original as never, calls));
 
 const { prepareExhibit } = await import('../../pipeline/exhibit.ts');
 const { default: vitrine } = await import('../../site/integration.ts');
