@@ -16,6 +16,8 @@ import { formatProblem } from '../pipeline/problems/problem.ts';
 
 const EXHIBIT_ID = 'virtual:vitrine/exhibit';
 const CAPTIONS_ID = 'virtual:vitrine/captions';
+/** How long a burst of file events must be quiet before the live preview prepares again. */
+const SETTLE_MS = 120;
 
 export interface VitrineOptions {
   /** The exhibit plan (relative to the project folder, or absolute). Default: "content/exhibit.yaml". */
@@ -78,9 +80,33 @@ export default function vitrine(options: VitrineOptions = {}): AstroIntegration 
       // plan with problems keeps the last good exhibit on screen and shows the problems.
       'astro:server:setup': ({ server, logger }) => {
         server.watcher.add(current!.watch);
-        const onChange = async (file: string) => {
+        // One preparation per change. An editor's save can arrive as several events, the first
+        // while the file is still being written: wait for the burst to settle, prepare once,
+        // and prepare again if another change came in meanwhile.
+        let running: Promise<void> | null = null;
+        let again = false;
+        const onChange = (file: string) => {
           if (!current!.watch.includes(resolve(file)) || !prepare) return;
-          const result = await prepare();
+          if (running) {
+            again = true;
+            return;
+          }
+          running = (async () => {
+            try {
+              do {
+                again = false;
+                await new Promise((settled) => setTimeout(settled, SETTLE_MS));
+                await refresh();
+              } while (again);
+            } catch (e) {
+              logger.error(`The exhibit could not be prepared again: ${(e as Error).message}`);
+            } finally {
+              running = null;
+            }
+          })();
+        };
+        const refresh = async () => {
+          const result = await prepare!();
           if (!result.prepared) {
             const errors = result.problems.filter((p) => p.severity === 'error').map(formatProblem).join('\n');
             logger.error(`The exhibit has problems; still showing the last good version:\n${errors}`);

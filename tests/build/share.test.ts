@@ -23,7 +23,7 @@ const panels: { room: string; id: string; caption: string; chart: string }[] = d
 );
 
 function build(out = dist): string {
-  const r = vitrine(['build', plan, '--out', out], dir, { VITRINE_CACHE_DIR: cache });
+  const r = vitrine(['build', plan, '--out', out, '--cache', cache], dir);
   expect(r.stderr).toBe('');
   expect(r.status).toBe(0);
   return r.stdout;
@@ -169,7 +169,7 @@ describe('without a public address', () => {
       expect(check.status).toBe(0);
       expect(check.stderr).toContain(`exhibit.yaml:${at.line}:${at.column} exhibit: warning:`);
       expect(check.stderr).toMatch(/no public address \("url"\)/);
-      const r = vitrine(['build', barePlan, '--out', join(bare, 'dist'), '--quiet'], bare, { VITRINE_CACHE_DIR: cache });
+      const r = vitrine(['build', barePlan, '--out', join(bare, 'dist'), '--quiet', '--cache', cache], bare);
       expect(r.status).toBe(0);
       const tags = meta(readFileSync(join(bare, 'dist', panels[0]!.room, panels[0]!.id, 'index.html'), 'utf8'));
       expect(tags.get('og:title')).toBeTruthy();
