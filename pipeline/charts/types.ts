@@ -3,6 +3,9 @@
  * measure's view prepared, and never compute a measure themselves.
  */
 
+import type * as kinds from './kinds.ts';
+import type { DataOf } from './chart.ts';
+
 export interface TableColumn {
   key: string;
   label: string;
@@ -190,18 +193,12 @@ export interface TreemapData {
   items: { id: string; label: string; value: number; group?: string }[];
 }
 
-export type ChartData =
-  | BarsData
-  | LinesData
-  | StripData
-  | MatrixData
-  | NetworkData
-  | TreeData
-  | KwicData
-  | TextmapData
-  | MultiplesData
-  | ScatterData
-  | TreemapData;
+/**
+ * The data of any chart kind: the union of what each kind registered in
+ * kinds.ts draws, so a new kind's data type (declared in its own file) is
+ * part of it without being listed here.
+ */
+export type ChartData = { [K in keyof typeof kinds]: DataOf<(typeof kinds)[K]> }[keyof typeof kinds];
 
 export interface ChartOutput {
   /** The wide layout (720 units). */

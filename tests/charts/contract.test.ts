@@ -7,14 +7,29 @@
  * apart, and its table. These are checks of the project's own contract (no
  * outside source); the kinds' own tests check what they draw.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, expectTypeOf, it } from 'vitest';
 import { z } from 'zod';
 import { defineChart, idOption, isDataAt } from '../../pipeline/charts/chart.ts';
 import type { Miss } from '../../pipeline/charts/chart.ts';
 import { charts, registry } from '../../pipeline/charts/index.ts';
 import * as kinds from '../../pipeline/charts/kinds.ts';
 import { el } from '../../pipeline/charts/svg.ts';
-import type { PinnedNote } from '../../pipeline/charts/types.ts';
+import type { ChartDataOf } from '../../pipeline/charts/index.ts';
+import type {
+  BarsData,
+  ChartData,
+  KwicData,
+  LinesData,
+  MatrixData,
+  MultiplesData,
+  NetworkData,
+  PinnedNote,
+  ScatterData,
+  StripData,
+  TextmapData,
+  TreeData,
+  TreemapData,
+} from '../../pipeline/charts/types.ts';
 import { expectChartRoot, texts } from './inspect.ts';
 import { wellFormednessProblems } from './xml.ts';
 
@@ -106,5 +121,15 @@ describe('a kind defined in one file and registered in one line', () => {
     expect(out.svg).toContain('data-note="5"');
     expect(out.summary).toBe('3 dots.');
     expect(out.alt).toBe('3 dots. Note 1: Note about 1. Note 5: Note about 5.');
+  });
+});
+
+describe('the data of the registered kinds', () => {
+  it('is read from the registry, so a kind’s data type is declared in its own file only', () => {
+    expectTypeOf<ChartData>().toEqualTypeOf<
+      BarsData | LinesData | StripData | MatrixData | NetworkData | TreeData | TreemapData | KwicData | TextmapData | MultiplesData | ScatterData
+    >();
+    expectTypeOf<ChartDataOf<'strip'>>().toEqualTypeOf<StripData>();
+    expectTypeOf<DotsData>().not.toMatchTypeOf<ChartData>();
   });
 });
