@@ -369,24 +369,40 @@ function wrapWidth(lines: Lines, lineText: (i: number) => string): number {
     const inBlock = (i > 0 && !lines.blank[i - 1]) || (i + 1 < lines.count && !lines.blank[i + 1]);
     if (inBlock) lengths.push(lineText(i).length);
   }
-  lengths.sort((a, b) => a - b);
-  lines.wrap = lengths.length < 10 ? Infinity : lengths[Math.floor(lengths.length * 0.9)]!;
+  lines.wrap = wrapOfLengths(lengths);
   return lines.wrap;
 }
 
 /**
- * A block of verse: two or more lines, each opening with a capital letter,
- * none reaching as far as wrapped prose does (three quarters of the wrap
- * width). common practice, no source.
+ * The wrap width from the lengths of the lines of blocks of two or more lines
+ * (trimmed): their 90th percentile, or Infinity when there are fewer than ten
+ * such lines (a text of unwrapped paragraphs). common practice, no source.
  */
-function isVerse(it: ParaItem, lineText: (i: number) => string, wrap: number): boolean {
-  if (it.l === it.f) return false;
-  for (let i = it.f; i <= it.l; i++) {
-    const line = lineText(i);
+export function wrapOfLengths(lengths: readonly number[]): number {
+  if (lengths.length < 10) return Infinity;
+  const sorted = [...lengths].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length * 0.9)]!;
+}
+
+/**
+ * Lines of verse: two or more lines (trimmed), each opening with a capital
+ * letter, none reaching as far as wrapped prose does (three quarters of the
+ * wrap width). common practice, no source.
+ */
+export function isVerseLines(lines: readonly string[], wrap: number): boolean {
+  if (lines.length < 2) return false;
+  for (const line of lines) {
     if (!/^[^\p{L}\p{N}]*\p{Lu}/u.test(line)) return false;
     if (line.length >= 0.75 * wrap) return false;
   }
   return true;
+}
+
+/** A block of verse (see isVerseLines). */
+function isVerse(it: ParaItem, lineText: (i: number) => string, wrap: number): boolean {
+  const lines: string[] = [];
+  for (let i = it.f; i <= it.l; i++) lines.push(lineText(i));
+  return isVerseLines(lines, wrap);
 }
 
 interface Judge {
