@@ -16,6 +16,13 @@ export interface TableColumn {
 export interface Table {
   columns: TableColumn[];
   rows: (string | number | null)[][];
+  /**
+   * Where each row stands in the text, for rows that are places in it (a concordance line, a
+   * quotation, a word's occurrences): the first word of each place, as a token index through
+   * the whole text (null for a row that is no place). The site links each to its paragraph of
+   * the reading edition. Absent when the rows are not places in the text.
+   */
+  places?: (number[] | null)[];
 }
 
 /**
@@ -138,6 +145,8 @@ export interface TreeNode {
   word: string;
   count: number;
   children: TreeNode[];
+  /** The first word (token index) of each occurrence that takes this path, when the measure records them. */
+  at?: number[];
 }
 export interface TreeData {
   kind: 'tree';

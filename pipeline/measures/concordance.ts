@@ -201,6 +201,7 @@ export const concordance: Measure<ConcordanceParams, ConcordanceResult> = {
         { key: 'right', label: 'Right context', numeric: false },
       ],
       rows: result.lines.map((l) => [l.chapter, l.paragraphInChapter, l.offset, l.left, l.keyword, l.right]),
+      places: result.lines.map((l) => [l.token]),
     };
   },
   views: {

@@ -72,12 +72,13 @@ function children(g: Grow, starts: number[], level: number): TreeNode[] {
     word: vocab[t]!,
     count: list.length,
     children: level + 1 < g.params.depth ? children(g, list, level + 1) : [],
+    at: list,
   }));
 }
 
 export const continuations: Measure<ContinuationsParams, ContinuationsResult> = {
   name: 'continuations',
-  version: 1,
+  version: 2,
   params: continuationsParams,
   needsCast: false,
   reads: {},
@@ -92,7 +93,7 @@ export const continuations: Measure<ContinuationsParams, ContinuationsResult> = 
       words,
       direction: params.direction,
       occurrences: starts.length,
-      root: { word: words.join(' '), count: starts.length, children: children({ model, step, params }, starts, 0) },
+      root: { word: words.join(' '), count: starts.length, children: children({ model, step, params }, starts, 0), at: starts },
     };
   },
   method: {
@@ -108,14 +109,17 @@ export const continuations: Measure<ContinuationsParams, ContinuationsResult> = 
   },
   table(result) {
     const rows: (string | number)[][] = [];
+    const places: (number[] | null)[] = [];
     const walk = (node: TreeNode, path: string[], level: number): void => {
       for (const c of node.children) {
         const next = [...path, c.word];
         rows.push([level, result.direction === 'right' ? next.join(' ') : [...next].reverse().join(' '), c.count]);
+        places.push(c.at ?? null);
         walk(c, next, level + 1);
       }
     };
     rows.push([0, result.root.word, result.root.count]);
+    places.push(result.root.at ?? null);
     walk(result.root, [result.root.word], 1);
     return {
       columns: [
@@ -124,6 +128,7 @@ export const continuations: Measure<ContinuationsParams, ContinuationsResult> = 
         { key: 'count', label: 'Occurrences', numeric: true },
       ],
       rows,
+      places,
     };
   },
   views: {

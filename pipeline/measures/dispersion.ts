@@ -211,6 +211,7 @@ export const dispersion: Measure<DispersionParams, DispersionResult> = {
         })),
       ],
       rows: result.words.map((w) => [w.word, w.frequency, w.dp, w.dpNorm, w.juillandD, w.entropyD2, ...w.perPart]),
+      places: result.words.map((w) => w.positions),
     };
   },
   views: {

@@ -200,6 +200,7 @@ export const repetition: Measure<RepetitionParams, RepetitionResult> = {
         f.memberCount,
         f.members.map((m) => `${m.phrase} (${m.count})`).join(' / '),
       ]),
+      places: result.families.map((f) => f.occurrences.map((o) => o.token)),
     };
   },
   views: {

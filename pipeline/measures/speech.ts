@@ -6,6 +6,7 @@ import { analyseDialogue, MIN_CONFIDENCE, type Rule } from '../dialogue/attribut
 import type { QuoteProblem } from '../dialogue/quotes.ts';
 import type { Convention } from '../dialogue/conventions.ts';
 import { chapterMarks, countOutsiders, type ChapterMarks, type OutsiderCount } from '../dialogue/report.ts';
+import { firstTokenAtOrAfter } from '../dialogue/view.ts';
 
 export const speechParams = z
   .object({
@@ -50,6 +51,8 @@ export interface SpeechQuote {
   outsider: string | null;
   /** The convention of the stretch the quotation stands in. */
   marks: Convention;
+  /** The first word inside the marks, as a token index through the text: where the quotation stands. */
+  token: number;
 }
 
 export interface SpeakerCounts {
@@ -131,6 +134,7 @@ export const speech: Measure<SpeechParams, SpeechResult> = {
       words: q.words,
       outsider: q.outsider,
       marks: q.marks,
+      token: firstTokenAtOrAfter(ctx.model, q.start, 0, ctx.model.tokens.count),
     }));
     const speechCount = a.quotes.filter((q) => q.kind === 'speech').length;
     let note: string | null = null;
@@ -188,6 +192,7 @@ export const speech: Measure<SpeechParams, SpeechResult> = {
         { key: 'text', label: 'Quotation', numeric: false },
       ],
       rows: result.quotes.map((q, i) => [i + 1, q.chapter, q.turn, q.speaker, q.addressee, q.kind, q.rule, q.outsider, q.confidence, q.words, q.text]),
+      places: result.quotes.map((q) => [q.token]),
     };
   },
   views: {

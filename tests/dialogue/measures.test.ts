@@ -109,6 +109,17 @@ describe('speech measure', () => {
     expect(lines.series.map((s) => s.values.reduce((a, b) => a + b, 0)).reduce((a, b) => a + b, 0)).toBe(r.totals.words);
   });
 
+  it('places each quotation at its first word, so that the table can link it to its paragraph', () => {
+    const table = speech.table(r, params);
+    const { tokens, text } = ctx.model;
+    expect(table.places).toHaveLength(r.quotes.length);
+    r.quotes.forEach((q, i) => {
+      const [t] = table.places![i]!;
+      expect(text.slice(tokens.start[t!], tokens.end[t!])).toBe(q.text.match(/[\p{L}\p{N}]+/u)![0]);
+      expect(tokens.chapter[t!]! + 1).toBe(q.chapter);
+    });
+  });
+
   it('returns empty measures and a note for a text without quotations', () => {
     const none = speech.compute(context('CHAPTER I.\n\nThe river rose in the night.', CAST), params);
     expect(none.quotes).toEqual([]);

@@ -1,6 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import { continuations } from '../../pipeline/measures/continuations.ts';
 import { context } from './fixture.ts';
+import type { TreeNode } from '../../pipeline/charts/types.ts';
+
+/** The tree without the places of its occurrences. */
+const shape = (n: TreeNode): Omit<TreeNode, 'at'> => ({ word: n.word, count: n.count, children: n.children.map(shape) });
 
 const HERON = [
   'CHAPTER 1.',
@@ -17,7 +21,7 @@ describe('continuations', () => {
   it('grows the tree of what follows, stopping at sentence ends (worked by hand)', () => {
     const r = run({ phrase: 'the heron', depth: 3, minCount: 1 });
     expect(r.occurrences).toBe(5);
-    expect(r.root).toEqual({
+    expect(shape(r.root)).toEqual({
       word: 'the heron',
       count: 5,
       children: [
@@ -35,7 +39,7 @@ describe('continuations', () => {
   });
 
   it('drops rare branches and keeps the most frequent children, ties alphabetically', () => {
-    expect(run({ phrase: 'the heron', depth: 3, minCount: 2 }).root.children).toEqual([
+    expect(run({ phrase: 'the heron', depth: 3, minCount: 2 }).root.children.map(shape)).toEqual([
       { word: 'stood', count: 4, children: [{ word: 'by', count: 3, children: [{ word: 'the', count: 2, children: [] }] }] },
     ]);
     const r = run({ phrase: 'stood by the', depth: 1, minCount: 1 });
@@ -47,7 +51,7 @@ describe('continuations', () => {
     const r = run({ phrase: 'heron', direction: 'left', depth: 2, minCount: 1 });
     // "the" before five of the six herons, "a" before one; nothing before them (sentence starts),
     // except "and the heron": "and" comes before that "the".
-    expect(r.root).toEqual({
+    expect(shape(r.root)).toEqual({
       word: 'heron',
       count: 6,
       children: [
@@ -58,7 +62,7 @@ describe('continuations', () => {
   });
 
   it('gives an empty tree for an absent phrase and draws a tree dataset', () => {
-    expect(run({ phrase: 'grey otter' }).root).toEqual({ word: 'grey otter', count: 0, children: [] });
+    expect(run({ phrase: 'grey otter' }).root).toEqual({ word: 'grey otter', count: 0, children: [], at: [] });
     const params = continuations.params.parse({ phrase: 'the heron', minCount: 1 });
     const r = continuations.compute(ctx, params);
     const tree = continuations.views.tree!(r, params);
@@ -66,5 +70,21 @@ describe('continuations', () => {
     const table = continuations.table(r, params);
     expect(table.rows[0]).toEqual([0, 'the heron', 5]);
     expect(table.rows).toContainEqual([2, 'the heron stood by', 3]);
+  });
+
+  it('records where each path is taken: the first word of every occurrence that takes it, one per table row', () => {
+    const params = continuations.params.parse({ phrase: 'the heron', depth: 3, minCount: 1 });
+    const r = continuations.compute(ctx, params);
+    const table = continuations.table(r, params);
+    expect(table.places).toHaveLength(table.rows.length);
+    const { tokens, vocab } = ctx.model;
+    table.rows.forEach((row, i) => {
+      const places = table.places![i]!;
+      expect(places).toHaveLength(row[2] as number);
+      for (const t of places) {
+        const words = String(row[1]).split(' ');
+        expect(words.map((_, k) => vocab[tokens.type[t + k]!])).toEqual(words);
+      }
+    });
   });
 });
