@@ -199,7 +199,7 @@ function printTextSummary(t: PrepareResult['texts'][number], io: Io): void {
     part = c.part;
     const at = c.line > 0 && t.headings.taken.length > 0 ? `, line ${c.line}` : '';
     const indent = partLines.size > 0 && c.part ? '    ' : '  ';
-    io.out(`${indent}${String(c.number).padStart(3)}. ${c.title}${at}  (${c.words.toLocaleString('en-GB')} words)\n`);
+    io.out(`${indent}${String(c.number).padStart(3)}. ${c.title}${at}  (${c.words.toLocaleString('en-GB')} words, ${c.paragraphs.toLocaleString('en-GB')} paragraph${c.paragraphs === 1 ? '' : 's'})\n`);
     const marks = t.dialogue.chapters.find((m) => m.chapter === c.number);
     if (marks) for (const line of describeChapterMarks(marks)) io.out(`${indent}       ${line}\n`);
   }

@@ -129,6 +129,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
     import('./charts/index.ts'),
     import('./stages/param-docs.ts'),
   ]);
+  const { editionFacts, tablePassages } = await import('./stages/edition.ts');
   const read: ReadTexts = readTexts(jobs, cache, problems);
   if (hasErrors(problems)) return failed();
   const measuredTexts = describeTexts(read.states.values());
@@ -155,8 +156,17 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
       // 4. notes and charts: the notes made exact against the text, placed by the chart kind, what it cannot draw reported.
       const present = (value: unknown) => {
         const data = (m.views as Record<string, (r: unknown, p: unknown) => Parameters<typeof drawPanel>[1]>)[job.chart]!(value, job.params);
-        const facts = { chapters: state.structure.chapters, parts: state.structure.parts, cast: jobs.cast, segments: m.segments?.(job.params) };
-        return { ...drawPanel(charts[job.chart]!, data, job.options, job.notes, facts), table: m.table(value, job.params) };
+        const edition = editionFacts(state.edition);
+        const facts = {
+          chapters: state.structure.chapters.map((c, i) => ({ title: c.title, paragraphs: edition.paragraphs[i] })),
+          parts: state.structure.parts,
+          cast: jobs.cast,
+          segments: m.segments?.(job.params),
+          segmentPassage: edition.segmentPassage,
+          segmentOfPassage: edition.segmentOfPassage,
+        };
+        const table = m.table(value, job.params);
+        return { ...drawPanel(charts[job.chart]!, data, job.options, job.notes, facts), table, passages: tablePassages(table, state.edition) };
       };
       let shown: ReturnType<typeof present>;
       try {
@@ -170,7 +180,7 @@ export async function prepareExhibit(planPath: string, opts: PrepareOptions): Pr
       }
       if (cache.stats.misses > misses) computed++;
       problems.push(...shown.problems);
-      panels.push(panelOf(job, shown.out, shown.table, shown.notes, result));
+      panels.push(panelOf(job, shown.out, shown.table, shown.passages, shown.notes, result));
     }
     rooms.push({ id: room.id, title: room.title, intro: room.intro, panels });
   }
@@ -212,7 +222,14 @@ function inputsOf(state: TextState, jobs: ExhibitJobs, read: ReadTexts) {
   return { text: state.read, job: state.job, cast: jobs.cast, language: jobs.exhibit.language, lexicons: read.lexicons };
 }
 
-function panelOf(job: PanelJob, drawn: { svg: string; svgNarrow: string | null; alt: string; summary: string }, table: PreparedPanel['table'], notes: PreparedPanel['notes'], data: unknown): PreparedPanel {
+function panelOf(
+  job: PanelJob,
+  drawn: { svg: string; svgNarrow: string | null; alt: string; summary: string },
+  table: PreparedPanel['table'],
+  passages: PreparedPanel['passages'],
+  notes: PreparedPanel['notes'],
+  data: unknown,
+): PreparedPanel {
   return {
     id: job.id,
     room: job.room,
@@ -227,6 +244,7 @@ function panelOf(job: PanelJob, drawn: { svg: string; svgNarrow: string | null; 
     alt: job.alt ?? drawn.alt,
     summary: job.alt ?? drawn.summary,
     table,
+    passages,
     notes,
     caption: job.caption,
     data,

@@ -13,7 +13,7 @@ import { BASE_HINT } from '../problems/catalogue.ts';
 export const ID_PATTERN = /^[a-z0-9][a-z0-9-]*$/;
 
 /** Room ids the site uses for its own pages. */
-export const RESERVED_ROOM_IDS: readonly string[] = ['methods', 'about', 'data', 'slides', 'cards', '_astro'];
+export const RESERVED_ROOM_IDS: readonly string[] = ['methods', 'about', 'data', 'slides', 'cards', '_astro', 'texts', 'glossary'];
 
 /** Schema version this loader reads. */
 export const PLAN_VERSION = 1;
@@ -232,6 +232,10 @@ export const textSchema = z
       .optional()
       .describe('Chapter-heading pattern: a regular expression matched per line, ignoring case. Optional, no default (headings are found by the text reader).'),
     edition: text(LIMITS.prose).optional().describe(`Note on the edition the text was taken from, at most ${LIMITS.prose} characters. Optional, no default.`),
+    title: text(LIMITS.title)
+      .optional()
+      .describe(`The text's title as printed, for its reading edition and citations, at most ${LIMITS.title} characters. Optional, default: the text's id.`),
+    author: text(LIMITS.name).optional().describe(`Who wrote the text, as the reading edition names them, at most ${LIMITS.name} characters. Optional, no default.`),
     dialogue: dialogueSchema.default({ verbs: [], pins: [], marks: 'auto' }),
   })
   .describe('A text the exhibit reads.');
@@ -259,6 +263,12 @@ export const noteAnchorSchema = z
       .optional()
       .describe('Part (BOOK, PART, VOLUME) of a two-level text, 1-based; with `chapter`, the chapter is counted within the part ({ part: 2, chapter: 3 } is the third chapter of the second part). Optional.'),
     chapter: z.number().int().positive().optional().describe('Chapter number, 1-based, counted through the whole text (or within `part` when one is given). Optional.'),
+    paragraph: z
+      .number()
+      .int()
+      .positive()
+      .optional()
+      .describe('Paragraph within `chapter`, 1-based, as the reading edition numbers them ({ chapter: 4, paragraph: 33 }); the note links to it. Optional.'),
     character: idSchema.optional().describe('Cast id of a character. Optional.'),
     word: text(LIMITS.name).optional().describe('A word of the text. Optional.'),
     segment: z.number().int().positive().optional().describe('Segment number, 1-based. Optional.'),
@@ -272,7 +282,15 @@ export const noteAnchorSchema = z
       });
       return;
     }
-    const given = Object.entries(at).filter(([k, v]) => v !== undefined && k !== 'part').length;
+    if (at.paragraph !== undefined && at.chapter === undefined) {
+      ctx.addIssue({
+        code: 'custom',
+        message: 'the note names a paragraph but not its chapter',
+        params: { hint: 'add the chapter the paragraph is counted in, e.g. at: { chapter: 4, paragraph: 33 }' },
+      });
+      return;
+    }
+    const given = Object.entries(at).filter(([k, v]) => v !== undefined && k !== 'part' && k !== 'paragraph').length;
     if (given !== 1) {
       ctx.addIssue({
         code: 'custom',
@@ -281,7 +299,7 @@ export const noteAnchorSchema = z
       });
     }
   })
-  .describe('What the note points at: exactly one of chapter (optionally within a part), character, word, segment. Required.');
+  .describe('What the note points at: exactly one of chapter (optionally within a part, or a paragraph of it), character, word, segment. Required.');
 
 export const noteSchema = z
   .strictObject({

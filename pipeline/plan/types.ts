@@ -54,6 +54,9 @@ export interface PlanText {
   /** Chapter-heading pattern as written; compiles with the "i" flag. */
   chapters?: string;
   edition?: string;
+  /** The text's title as printed, and its author. */
+  title?: string;
+  author?: string;
   /** Extra speech verbs and curator pins (speakers checked against the cast). */
   dialogue: DialogueData;
   where: Where;
@@ -79,7 +82,7 @@ export interface PlanCastMember {
 }
 
 export interface PlanNote {
-  /** Exactly one of chapter (1-based), character (a cast id, checked), word, segment (1-based). */
+  /** Exactly one of chapter (1-based; with a paragraph in it, 1-based), character (a cast id, checked), word, segment (1-based). */
   at: NoteAnchor;
   text: string;
   where: Where;

@@ -19,6 +19,9 @@ export interface TextJob {
   display: string;
   options: TextOptions;
   edition: string | null;
+  /** The text's title as printed (the plan's, else its id) and its author, for the reading edition. */
+  title: string;
+  author: string | null;
   dialogue: DialogueSettings;
   where: Where;
 }
@@ -44,7 +47,7 @@ export interface PanelJob {
   /** Caption file as written (relative to the exhibit folder, normalised). */
   caption: string;
   alt: string | null;
-  notes: { at: { chapter?: number; character?: string; word?: string; segment?: number }; text: string; where: Where }[];
+  notes: { at: { part?: number; chapter?: number; paragraph?: number; character?: string; word?: string; segment?: number }; text: string; where: Where }[];
   where: Where;
   measureWhere: Where;
 }
@@ -96,6 +99,8 @@ export function planJobs(plan: Plan, cwd = process.cwd()): ExhibitJobs {
         ...(t.chapters !== undefined ? { chapterPattern: t.chapters } : {}),
       },
       edition: t.edition ?? null,
+      title: t.title ?? t.id,
+      author: t.author ?? null,
       dialogue: {
         verbs: t.dialogue.verbs,
         pins: t.dialogue.pins.map((p) => ({

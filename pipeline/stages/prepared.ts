@@ -5,12 +5,15 @@
  */
 import type { MethodCard } from '../measures/types.ts';
 import type { Table } from '../charts/types.ts';
+import type { Edition, Passage } from '../edition/edition.ts';
 
 export interface PreparedNote {
   label: string;
   text: string;
   /** What the note points at, in words ("Chapter 4: The Flood"). */
   target: string;
+  /** Its passage of the panel's text in the reading edition (a chapter, or a paragraph of one), when it points at one. */
+  passage: { chapter: number; paragraph: number | null } | null;
 }
 
 export interface PreparedPanel {
@@ -30,6 +33,8 @@ export interface PreparedPanel {
   /** The summary alone, without the notes (or the curator's own alt text): for cards and teasers. */
   summary: string;
   table: Table;
+  /** Where each row of the table stands in the reading edition of the panel's text (per row; null for a row that is no place), or null when the rows are not places. */
+  passages: (Passage[] | null)[] | null;
   notes: PreparedNote[];
   /** Caption file, relative to the exhibit folder (as written in the plan). */
   caption: string;
@@ -62,11 +67,16 @@ export interface PreparedMethod {
 
 export interface PreparedText {
   id: string;
+  /** Its title as printed (the plan's, else its id) and its author. */
+  title: string;
+  author: string | null;
   source: string;
   edition: string | null;
   hash: string;
   words: number;
   chapters: { number: number; title: string; part: string | null; words: number }[];
+  /** The reading edition: every chapter and paragraph, set for the page. */
+  pages: Edition;
 }
 
 export interface PreparedExhibit {

@@ -57,11 +57,14 @@ export function captionFilesOf({ jobs, rooms }: Pick<Measured, 'jobs' | 'rooms'>
 export function describeTexts(states: Iterable<TextState>): PreparedText[] {
   return [...states].map((s) => ({
     id: s.job.id,
+    title: s.job.title,
+    author: s.job.author,
     source: s.job.source,
     edition: s.job.edition,
     hash: s.read.hash,
     words: s.structure.words,
     chapters: s.structure.chapters.map((c) => ({ number: c.number, title: c.title, part: c.part, words: c.words })),
+    pages: s.edition,
   }));
 }
 
@@ -87,7 +90,14 @@ export function summarise(s: TextState, cast: CastMember[]): TextSummary {
     id: s.job.id,
     source: s.job.display,
     words: s.structure.words,
-    chapters: s.structure.chapters.map((c, i) => ({ number: c.number, title: c.title, words: c.words, part: c.part, line: model.chapters[i]?.line ?? 0 })),
+    chapters: s.structure.chapters.map((c, i) => ({
+      number: c.number,
+      title: c.title,
+      words: c.words,
+      paragraphs: model.chapters[i]?.paragraphCount ?? 0,
+      part: c.part,
+      line: model.chapters[i]?.line ?? 0,
+    })),
     headings: model.headings ?? { taken: [], rejected: [] },
     trimmed: model.trimmed ?? {},
     outside: (model.skipped ?? []).map((r) => ({ from: r.line, to: model.position(Math.max(r.start, r.end - 1)).line })),

@@ -7,7 +7,8 @@ export interface TextSummary {
   id: string;
   source: string;
   words: number;
-  chapters: { number: number; title: string; words: number; part: string | null; line: number }[];
+  /** Paragraphs are counted as the reading edition numbers them (within the chapter). */
+  chapters: { number: number; title: string; words: number; paragraphs: number; part: string | null; line: number }[];
   /** The headings taken and turned down, and the front and back matter trimmed (source lines). */
   headings: HeadingReport;
   trimmed: { front?: TrimmedLines; back?: TrimmedLines };

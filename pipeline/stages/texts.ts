@@ -1,7 +1,7 @@
 /**
  * Stage 2 of pipeline/exhibit.ts, texts and pins: read each text the plan names
  * (decoding checked; the model is built only when something needs it), its
- * chapter structure (cached like a measure) and what was found in reading it,
+ * chapter structure and its reading edition (each cached like a measure) and what was found in reading it,
  * the plan's word lists, and the curator's dialogue pins, which must each match
  * a quotation.
  */
@@ -21,11 +21,15 @@ import type { ExhibitJobs, TextJob } from './jobs.ts';
 import { atWhere } from './where.ts';
 import { measure } from './measures.ts';
 import { READING_VERSION, readingProblems, readingReport, readingReportSchema } from './reading.ts';
+import { editionOf } from './edition.ts';
+import type { Edition } from '../edition/edition.ts';
 
 export interface TextState {
   job: TextJob;
   read: ReadText;
   structure: StructureResult;
+  /** The reading edition (cached like a measure). */
+  edition: Edition;
 }
 
 export interface ReadTexts {
@@ -95,7 +99,7 @@ export function readTexts(jobs: ExhibitJobs, cache: ResultCache, problems: Probl
     );
     // An empty text has nothing to check further: its pins and panels would only repeat the fault.
     if (report.words === 0) continue;
-    states.set(t.id, { job: t, read: text, structure });
+    states.set(t.id, { job: t, read: text, structure, edition: editionOf(text, t.options, cache) });
   }
   const lexicons = readLexicons(jobs.lexicons, problems);
   // A word list a panel names must be one of the plan's: each measure says which it reads.
