@@ -21,11 +21,11 @@ const demoPanels: { room: string; id: string; measure: string; caption: string }
 );
 
 describe('vitrine check', () => {
-  it('passes on the demo exhibit and prints its chapters with titles, words and cast mentions', () => {
+  it('passes on the demo exhibit and prints its chapters with titles, words, paragraphs and cast mentions', () => {
     const r = vitrine(['check', 'content/exhibit.yaml']);
     expect(r.stderr).not.toMatch(/error/i);
     expect(r.status).toBe(0);
-    const chapters = r.stdout.split('\n').filter((l) => /^\s+\d+\. .+\(\d[\d,]* words\)$/.test(l));
+    const chapters = r.stdout.split('\n').filter((l) => /^\s+\d+\. .+\(\d[\d,]* words, \d[\d,]* paragraphs?\)$/.test(l));
     expect(chapters.length).toBeGreaterThanOrEqual(4);
     expect(r.stdout).toMatch(/Cast mentions:/);
     expect(r.stdout).toMatch(/ready to build/);
@@ -161,6 +161,22 @@ describe('vitrine build', () => {
       expect(readFileSync(join(out, p.room, p.id, 'data.csv'), 'utf8').split('\r\n').length).toBeGreaterThan(2);
       expect(JSON.parse(readFileSync(join(out, p.room, p.id, 'data.json'), 'utf8')).measure).toBe(p.measure);
     }
+  });
+
+  it('publishes the text: a contents page and a page per chapter, its paragraphs numbered as vitrine check counts them', () => {
+    const check = vitrine(['check', 'content/exhibit.yaml']);
+    const counted = [...check.stdout.matchAll(/^\s+(\d+)\. .+\(\d[\d,]* words, (\d[\d,]*) paragraphs?\)$/gm)].map((m) => [Number(m[1]), Number(m[2]!.replace(/,/g, ''))]);
+    expect(counted.length).toBe(6);
+    const contents = readFileSync(join(out, 'texts/lamps/index.html'), 'utf8');
+    for (const [chapter, paragraphs] of counted) {
+      expect(contents).toContain(`href="/texts/lamps/${chapter}/"`);
+      const page = readFileSync(join(out, `texts/lamps/${chapter}/index.html`), 'utf8');
+      const ids = [...page.matchAll(/<div class="para" id="p(\d+)"/g)].map((m) => Number(m[1]));
+      expect(ids).toEqual(Array.from({ length: paragraphs! }, (_, k) => k + 1));
+    }
+    // The home page keeps its promise, and the About page links the text.
+    expect(readFileSync(join(out, 'index.html'), 'utf8')).toContain('href="/texts/lamps/"');
+    expect(readFileSync(join(out, 'about/index.html'), 'utf8')).toContain('href="/texts/lamps/"');
   });
 
   it('draws identical SVG on a second build (determinism)', () => {
