@@ -78,7 +78,7 @@ describe('curator notes on a two-level text', () => {
   const where = { file: 'exhibit.yaml', line: 1, column: 1, path: 'rooms[0].panels[0].notes[0]' };
 
   it('finds { part: 2, chapter: 2 } as the sixth chapter, and { chapter: 6 } as the same one', () => {
-    expect(exactTarget({ part: 2, chapter: 2 }, facts)).toEqual({ at: { chapter: 6, title: 'Book Two, Chapter II' }, target: 'Book Two, Chapter II' });
+    expect(exactTarget({ part: 2, chapter: 2 }, facts)).toEqual({ at: { chapter: 6, title: 'Book Two, Chapter II' }, target: 'Book Two, Chapter II', passage: { chapter: 6, paragraph: null } });
     expect(exactTarget({ chapter: 6 }, facts)).toEqual(exactTarget({ part: 2, chapter: 2 }, facts));
     const drawn = drawPanel(charts.bars, bars, {}, [{ at: { part: 2, chapter: 2 }, text: 'The miller’s chapter.', where }], facts);
     expect(drawn.problems).toEqual([]);
